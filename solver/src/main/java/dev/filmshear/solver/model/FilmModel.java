@@ -55,15 +55,18 @@ public final class FilmModel implements FilmState {
                 : StepControl.Adaptive.of(filmCase.tolerance());
         this.integrator = new DirkIntegrator(discretization, options.scheme(), control);
         this.state = new double[discretization.size()];
+        // the state at t = 0 is the fluid before the start: walls still at the initial velocity, so the first
+        // rate holds no jump and an impulsive start enters through the stage boundary values only
         discretization.initialState(state);
-        discretization.applyPrescribed(0, state);
         if (!discretization.update(0, state)) {
             throw new NumericalFailureException("the initial state gives no usable viscosity or density", 0, 0, -1,
                     "temperature");
         }
         double horizon = Double.isFinite(end) ? end : 1;
-        double firstStep = Math.min(horizon * 1e-3, 1e-3 * momentumTimeScaleEstimate());
-        integrator.start(0, state, firstStep, horizon * 1e-14);
+        double cellTime = momentumTimeScaleEstimate();
+        double firstStep = Math.min(horizon * 1e-3, 1e-3 * cellTime);
+        // a step a million times shorter than the diffusion time of the finest cell resolves nothing more
+        integrator.start(0, state, firstStep, 1e-6 * cellTime);
         current = true;
     }
 

@@ -235,7 +235,8 @@ public final class DirkIntegrator {
     }
 
     private void checkStep(double h) {
-        if (!(h >= minStep)) {
+        // below a few units in the last place of t, t + h no longer differs from t
+        if (!(h >= minStep) || !(h >= 64 * Math.ulp(t))) {
             throw new NumericalFailureException("step size collapsed to " + h + " s (smallest allowed "
                     + minStep + " s)", t, accepted, -1, null);
         }
