@@ -1,0 +1,146 @@
+package dev.filmshear.cli;
+
+import dev.filmshear.cli.input.CaseFile;
+import dev.filmshear.cli.input.CaseReader;
+import dev.filmshear.solver.model.CaseNumbers;
+import dev.filmshear.solver.model.FilmCase;
+import dev.filmshear.solver.physics.Domain;
+import dev.filmshear.solver.physics.FilmPhysics;
+import dev.filmshear.solver.physics.ThermalCondition;
+import dev.filmshear.solver.physics.ViscosityLaw;
+import dev.filmshear.solver.physics.Wall;
+import dev.filmshear.solver.physics.WallMotion;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.concurrent.Callable;
+
+/**
+ * {@code check CASE.toml}: reads and validates a case and prints it resolved to SI units with its derived
+ * numbers; solves nothing.
+ */
+@Command(name = "check", description = "Read and validate a case; print it in SI units with its time scales, "
+        + "Reynolds number and the warnings known before solving. Solves nothing.")
+final class CheckCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "CASE.toml", description = "the case file")
+    Path caseFile;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        CaseFile file = new CaseReader().read(caseFile);
+        PrintWriter out = spec.commandLine().getOut();
+        describe(file, out);
+        return ExitCode.DONE.code();
+    }
+
+    static void describe(CaseFile file, PrintWriter out) {
+        FilmCase c = file.filmCase();
+        FilmPhysics p = c.physics();
+        out.printf("case %s: %s%n", file.fileName(), file.title());
+        if (p.domain() instanceof Domain.Gap g) {
+            out.printf("  gap                 %s m%n", g.gap());
+        } else {
+            double depth = ((Domain.SemiInfinite) p.domain()).depth();
+            out.printf("  semi-infinite       %s%n", Double.isNaN(depth) ? "depth chosen by the solver" : depth + " m");
+        }
+        ViscosityLaw law = p.fluid().viscosity();
+        out.printf("  viscosity law       %s%n", law.describe());
+        out.printf("  density             %s kg/m^3 at %s K, expansion %s 1/K%n", p.fluid().density().reference(),
+                p.fluid().density().referenceTemperature(), p.fluid().density().expansion());
+        if (p.isThermal()) {
+            out.printf("  specific heat       %s J/(kg*K)%n", p.fluid().specificHeat());
+            out.printf("  conductivity        %s W/(m*K)%n", p.fluid().conductivity());
+        } else {
+            out.printf("  energy equation     not solved (isothermal film)%n");
+        }
+        wall(out, "lower wall", p.lower());
+        if (p.upper() != null) {
+            wall(out, "upper wall", p.upper());
+        }
+        out.printf("  pressure gradient   %s Pa/m%n", p.pressureGradient());
+        out.printf("  initial state       velocity %s m/s, temperature %s K%n", p.initialVelocity(),
+                p.initialTemperature());
+        out.printf("  time                %s, tolerance %s%n",
+                c.isSteady() ? "steady solve" : "to " + c.endTime() + " s", c.tolerance());
+        out.printf("  grid                %d points, clustering %s%n", c.grid().points(), c.grid().clustering());
+        out.printf("  output times        %s s%n", Arrays.toString(c.outputTimes()));
+
+        CaseNumbers n = CaseNumbers.of(c);
+        out.printf("derived numbers at %s K:%n", n.referenceTemperature());
+        out.printf("  density             %.6g kg/m^3%n", n.density());
+        out.printf("  viscosity           %.6g Pa*s (kinematic %.6g m^2/s)%n", n.viscosity(), n.kinematicViscosity());
+        out.printf("  wall speed          %.6g m/s (largest difference)%n", n.relativeSpeed());
+        out.printf("  Reynolds number     %.6g%s%n", n.reynoldsNumber(),
+                p.isSemiInfinite() ? " (on the penetration depth)" : " (U*gap/nu)");
+        if (!p.isSemiInfinite()) {
+            out.printf("  momentum time scale %.6g s (slowest mode of the discrete operator; gap^2/(pi^2 nu) = %.6g s)%n",
+                    n.momentumTimeScale(), n.momentumTimeScaleAnalytic());
+        } else {
+            out.printf("  truncated depth     %.6g m%n", n.depth());
+        }
+        if (!Double.isNaN(n.penetrationDepth())) {
+            out.printf("  penetration depth   %.6g m%n", n.penetrationDepth());
+        }
+        if (p.isThermal()) {
+            out.printf("  thermal time scale  %.6g s (gap^2/alpha), Prandtl number %.6g%n", n.thermalTimeScale(),
+                    n.prandtlNumber());
+        }
+        boolean anyWarning = false;
+        if (n.laminarFlowDoubtful()) {
+            out.printf("warning: Reynolds number %.4g above %.0f: the film may not stay laminar%n",
+                    n.reynoldsNumber(), CaseNumbers.LAMINAR_REYNOLDS_LIMIT);
+            anyWarning = true;
+        }
+        if (!law.isConstant() && !law.isValidAt(p.referenceTemperature())) {
+            out.printf("warning: the initial temperature %s K is outside the %s law's range %s K to %s K%n",
+                    p.referenceTemperature(), law.name(), law.validFrom(), law.validTo());
+            anyWarning = true;
+        }
+        if (!anyWarning) {
+            out.printf("no warnings before solving%n");
+        }
+    }
+
+    private static void wall(PrintWriter out, String name, Wall wall) {
+        out.printf("  %-19s %s%s%n", name, motion(wall.motion()), thermal(wall.thermal()));
+    }
+
+    static String motion(WallMotion m) {
+        if (m instanceof WallMotion.Steady s) {
+            return "velocity " + s.velocity() + " m/s from t = 0";
+        }
+        if (m instanceof WallMotion.Ramp r) {
+            return "ramp " + r.from() + " -> " + r.to() + " m/s from t = " + r.start() + " s over " + r.duration() + " s";
+        }
+        if (m instanceof WallMotion.Sine s) {
+            return "sine: " + s.mean() + " + " + s.amplitude() + " sin(2 pi " + s.frequency() + " t + " + s.phase()
+                    + ") m/s";
+        }
+        WallMotion.Table t = (WallMotion.Table) m;
+        return "table of " + t.times().length + " points, " + Arrays.toString(t.values()) + " m/s at "
+                + Arrays.toString(t.times()) + " s";
+    }
+
+    static String thermal(ThermalCondition c) {
+        if (c == null) {
+            return "";
+        }
+        if (c instanceof ThermalCondition.FixedTemperature f) {
+            return "; temperature " + f.temperature() + " K";
+        }
+        if (c instanceof ThermalCondition.HeatFlux q) {
+            return q.flux() == 0 ? "; adiabatic" : "; heat flux " + q.flux() + " W/m^2 into the fluid";
+        }
+        ThermalCondition.HeatTransfer h = (ThermalCondition.HeatTransfer) c;
+        return "; heat transfer " + h.coefficient() + " W/(m^2*K) to " + h.ambient() + " K";
+    }
+}

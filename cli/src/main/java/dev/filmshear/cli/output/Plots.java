@@ -1,0 +1,176 @@
+package dev.filmshear.cli.output;
+
+import dev.filmshear.solver.model.FilmResult;
+import dev.filmshear.solver.model.History;
+import dev.filmshear.solver.model.Snapshot;
+import org.knowm.xchart.BitmapEncoder;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYChartBuilder;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.Styler;
+import org.knowm.xchart.style.lines.SeriesLines;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * The PNG plots of a run, drawn with XChart: velocity profiles at the output times (with the closed-form
+ * solution beside them, dashed, wherever the case has one), wall shear stress over time, and for a heated
+ * film the temperature and viscosity profiles and the highest temperature over time.
+ */
+public final class Plots {
+    /** Our own palette: dark teal, burnt orange, slate blue, olive, plum, sand, charcoal. */
+    private static final Color[] PALETTE = {
+            new Color(0x1b6f6a), new Color(0xc0612b), new Color(0x4a5c8c), new Color(0x7a8a2e),
+            new Color(0x8c4a7a), new Color(0xb59a4a), new Color(0x3a3a3a)};
+    private static final int WIDTH = 900;
+    private static final int HEIGHT = 560;
+    /** Profiles drawn at most; more output times are thinned evenly. */
+    private static final int MAX_PROFILES = 7;
+
+    private Plots() {
+    }
+
+    /** Writes every plot of the run into {@code dir}. */
+    public static void write(Path dir, FilmResult result, AnalyticComparison analytic) throws IOException {
+        List<Snapshot> profiles = thin(result.snapshots());
+        boolean thermal = result.filmCase().physics().isThermal();
+        save(profileChart("Velocity across the film", "velocity (m/s)", profiles, Field.VELOCITY, analytic),
+                dir.resolve("velocity_profiles.png"));
+        if (result.history().size() > 1) {
+            save(historyChart(result), dir.resolve("wall_shear_stress.png"));
+        }
+        if (thermal) {
+            save(profileChart("Temperature across the film", "temperature (K)", profiles, Field.TEMPERATURE, null),
+                    dir.resolve("temperature_profiles.png"));
+            save(profileChart("Viscosity across the film", "viscosity (Pa s)", profiles, Field.VISCOSITY, null),
+                    dir.resolve("viscosity_profiles.png"));
+            if (result.history().size() > 1) {
+                save(temperatureHistoryChart(result), dir.resolve("max_temperature.png"));
+            }
+        }
+    }
+
+    private enum Field { VELOCITY, TEMPERATURE, VISCOSITY }
+
+    private static List<Snapshot> thin(List<Snapshot> all) {
+        if (all.size() <= MAX_PROFILES) {
+            return all;
+        }
+        List<Snapshot> kept = new ArrayList<>();
+        for (int k = 0; k < MAX_PROFILES; k++) {
+            kept.add(all.get((int) Math.round(k * (all.size() - 1.0) / (MAX_PROFILES - 1))));
+        }
+        return kept;
+    }
+
+    private static XYChart base(String title, String xTitle, String yTitle) {
+        XYChart chart = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(title).xAxisTitle(xTitle)
+                .yAxisTitle(yTitle).build();
+        Styler styler = chart.getStyler();
+        styler.setChartBackgroundColor(Color.WHITE);
+        styler.setPlotBackgroundColor(Color.WHITE);
+        styler.setPlotBorderVisible(false);
+        styler.setLegendPosition(Styler.LegendPosition.OutsideE);
+        styler.setLegendBorderColor(Color.WHITE);
+        styler.setChartTitleFont(new Font(Font.SANS_SERIF, Font.BOLD, 16));
+        styler.setSeriesColors(PALETTE);
+        chart.getStyler().setPlotGridLinesColor(new Color(0xe4e4e4));
+        chart.getStyler().setAntiAlias(true);
+        return chart;
+    }
+
+    private static XYChart profileChart(String title, String valueTitle, List<Snapshot> profiles, Field field,
+                                        AnalyticComparison analytic) {
+        XYChart chart = base(title, valueTitle, "y (um)");
+        int k = 0;
+        for (Snapshot s : profiles) {
+            double[] y = s.y();
+            double[] yMicro = new double[y.length];
+            for (int i = 0; i < y.length; i++) {
+                yMicro[i] = y[i] * 1e6;
+            }
+            double[] values = switch (field) {
+                case VELOCITY -> s.velocity();
+                case TEMPERATURE -> s.temperature();
+                case VISCOSITY -> s.viscosity();
+            };
+            Color color = PALETTE[k % PALETTE.length];
+            String label = timeLabel(s.time());
+            XYSeries series = chart.addSeries(label, values, yMicro);
+            series.setMarker(SeriesMarkers.NONE);
+            series.setLineColor(color);
+            series.setLineStyle(new BasicStroke(2f));
+            if (analytic != null && field == Field.VELOCITY && analytic.appliesAt(s.time())) {
+                double[] exact = analytic.velocityProfile(s.time(), y);
+                XYSeries dashed = chart.addSeries(label + " exact", exact, yMicro);
+                dashed.setMarker(SeriesMarkers.NONE);
+                dashed.setLineColor(Color.BLACK);
+                dashed.setLineStyle(SeriesLines.DASH_DASH);
+                dashed.setShowInLegend(k == 0);
+            }
+            k++;
+        }
+        return chart;
+    }
+
+    private static XYChart historyChart(FilmResult result) {
+        History h = result.history();
+        double[] t = h.column(History.Column.TIME);
+        boolean logTime = t.length > 1 && t[0] > 0 && t[t.length - 1] / t[0] > 100;
+        XYChart chart = base("Wall shear stress", "time (s)", "mu dU/dy at the wall (Pa)");
+        chart.getStyler().setXAxisLogarithmic(logTime);
+        addLine(chart, "lower wall", t, h.column(History.Column.WALL_SHEAR_STRESS_LOWER), PALETTE[0]);
+        if (!result.filmCase().physics().isSemiInfinite()) {
+            addLine(chart, "upper wall", t, h.column(History.Column.WALL_SHEAR_STRESS_UPPER), PALETTE[1]);
+        }
+        return chart;
+    }
+
+    private static XYChart temperatureHistoryChart(FilmResult result) {
+        History h = result.history();
+        double[] t = h.column(History.Column.TIME);
+        boolean logTime = t.length > 1 && t[0] > 0 && t[t.length - 1] / t[0] > 100;
+        XYChart chart = base("Film temperature", "time (s)", "temperature (K)");
+        chart.getStyler().setXAxisLogarithmic(logTime);
+        addLine(chart, "highest", t, h.column(History.Column.MAX_TEMPERATURE), PALETTE[1]);
+        addLine(chart, "mean", t, h.column(History.Column.MEAN_TEMPERATURE), PALETTE[2]);
+        return chart;
+    }
+
+    private static void addLine(XYChart chart, String name, double[] x, double[] y, Color color) {
+        XYSeries series = chart.addSeries(name, x, y);
+        series.setMarker(SeriesMarkers.NONE);
+        series.setLineColor(color);
+        series.setLineStyle(new BasicStroke(2f));
+    }
+
+    /** A time with a unit a reader takes in at a glance. */
+    static String timeLabel(double t) {
+        if (Double.isInfinite(t)) {
+            return "steady";
+        }
+        double a = Math.abs(t);
+        if (a >= 1) {
+            return String.format("t = %.4g s", t);
+        }
+        if (a >= 1e-3) {
+            return String.format("t = %.4g ms", t * 1e3);
+        }
+        if (a >= 1e-6) {
+            return String.format("t = %.4g us", t * 1e6);
+        }
+        return String.format("t = %.4g ns", t * 1e9);
+    }
+
+    private static void save(XYChart chart, Path file) throws IOException {
+        String name = file.toString();
+        BitmapEncoder.saveBitmap(chart, name.substring(0, name.length() - 4), BitmapEncoder.BitmapFormat.PNG);
+    }
+}
