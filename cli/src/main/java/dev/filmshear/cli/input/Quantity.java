@@ -25,14 +25,31 @@ public record Quantity(double number, Unit unit) {
         return unit.dimension();
     }
 
-    /** number * factor: the SI value of an interval (a difference, or any non-temperature quantity). */
+    /**
+     * number * factor: the SI value of an interval (a difference, or any non-temperature quantity). The
+     * product is formed in decimal and rounded once, so that "60 us" gives exactly the double nearest
+     * 6e-5 s, as a user who typed 6e-5 would get, rather than 60 * 1e-6 rounded twice.
+     */
     public double interval() {
-        return number * unit.factor();
+        return decimalProduct(number, unit.factor());
     }
 
     /** (number + offset) * factor: the SI value read as an absolute temperature on a shifted scale. */
     public double absolute() {
-        return (number + unit.offset()) * unit.factor();
+        if (unit.offset() == 0) {
+            return decimalProduct(number, unit.factor());
+        }
+        java.math.BigDecimal sum = new java.math.BigDecimal(Double.toString(number))
+                .add(new java.math.BigDecimal(Double.toString(unit.offset())));
+        return sum.multiply(new java.math.BigDecimal(Double.toString(unit.factor()))).doubleValue();
+    }
+
+    private static double decimalProduct(double a, double b) {
+        if (!Double.isFinite(a) || !Double.isFinite(b)) {
+            return a * b;
+        }
+        return new java.math.BigDecimal(Double.toString(a)).multiply(new java.math.BigDecimal(Double.toString(b)))
+                .doubleValue();
     }
 
     /** As written, for example {@code 25 um}. */

@@ -8,6 +8,7 @@ import org.knowm.xchart.XYChart;
 import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.Styler;
+import org.knowm.xchart.style.XYStyler;
 import org.knowm.xchart.style.lines.SeriesLines;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
@@ -73,7 +74,7 @@ public final class Plots {
     private static XYChart base(String title, String xTitle, String yTitle) {
         XYChart chart = new XYChartBuilder().width(WIDTH).height(HEIGHT).title(title).xAxisTitle(xTitle)
                 .yAxisTitle(yTitle).build();
-        Styler styler = chart.getStyler();
+        XYStyler styler = chart.getStyler();
         styler.setChartBackgroundColor(Color.WHITE);
         styler.setPlotBackgroundColor(Color.WHITE);
         styler.setPlotBorderVisible(false);
@@ -81,14 +82,28 @@ public final class Plots {
         styler.setLegendBorderColor(Color.WHITE);
         styler.setChartTitleFont(new Font(Font.SANS_SERIF, Font.BOLD, 16));
         styler.setSeriesColors(PALETTE);
-        chart.getStyler().setPlotGridLinesColor(new Color(0xe4e4e4));
-        chart.getStyler().setAntiAlias(true);
+        styler.setPlotGridLinesColor(new Color(0xe4e4e4));
+        styler.setAntiAlias(true);
+        styler.setXAxisDecimalPattern("#,##0.###");
+        styler.setYAxisDecimalPattern("#,##0.###");
+        styler.setXAxisMaxLabelCount(8);
+        styler.setYAxisTickMarkSpacingHint(60);
+        styler.setXAxisTickMarkSpacingHint(90);
         return chart;
     }
 
     private static XYChart profileChart(String title, String valueTitle, List<Snapshot> profiles, Field field,
                                         AnalyticComparison analytic) {
         XYChart chart = base(title, valueTitle, "y (um)");
+        // XChart 3.8.8 puts a y tick at nearly every node of an evenly spaced profile; label only round values
+        // and leave the horizontal grid out so the axis stays readable
+        double depth = profiles.get(0).y()[profiles.get(0).points() - 1] * 1e6;
+        double step = niceStep(depth / 5);
+        chart.getStyler().setPlotGridHorizontalLinesVisible(false);
+        chart.getStyler().setyAxisTickLabelsFormattingFunction(v -> {
+            double k = Math.rint(v / step);
+            return Math.abs(v - k * step) < 1e-6 * step ? new java.text.DecimalFormat("#,##0.###").format(k * step) : "";
+        });
         int k = 0;
         for (Snapshot s : profiles) {
             double[] y = s.y();
@@ -120,11 +135,48 @@ public final class Plots {
         return chart;
     }
 
+    /** A time unit that suits a span: its name and its size in seconds. */
+    private record TimeUnit(String name, double seconds) {
+        static TimeUnit forSpan(double end) {
+            if (end >= 1) {
+                return new TimeUnit("s", 1);
+            }
+            if (end >= 1e-3) {
+                return new TimeUnit("ms", 1e-3);
+            }
+            if (end >= 1e-6) {
+                return new TimeUnit("us", 1e-6);
+            }
+            return new TimeUnit("ns", 1e-9);
+        }
+
+        double[] scale(double[] times) {
+            double[] out = new double[times.length];
+            for (int i = 0; i < times.length; i++) {
+                out[i] = times[i] / seconds;
+            }
+            return out;
+        }
+    }
+
+    /** 1, 2 or 5 times a power of ten, at least {@code raw}. */
+    static double niceStep(double raw) {
+        double power = Math.pow(10, Math.floor(Math.log10(raw)));
+        for (double m : new double[] {1, 2, 5, 10}) {
+            if (m * power >= raw) {
+                return m * power;
+            }
+        }
+        return 10 * power;
+    }
+
     private static XYChart historyChart(FilmResult result) {
         History h = result.history();
-        double[] t = h.column(History.Column.TIME);
+        double[] seconds = h.column(History.Column.TIME);
+        TimeUnit unit = TimeUnit.forSpan(seconds[seconds.length - 1]);
+        double[] t = unit.scale(seconds);
         boolean logTime = t.length > 1 && t[0] > 0 && t[t.length - 1] / t[0] > 100;
-        XYChart chart = base("Wall shear stress", "time (s)", "mu dU/dy at the wall (Pa)");
+        XYChart chart = base("Wall shear stress", "time (" + unit.name() + ")", "mu dU/dy at the wall (Pa)");
         chart.getStyler().setXAxisLogarithmic(logTime);
         addLine(chart, "lower wall", t, h.column(History.Column.WALL_SHEAR_STRESS_LOWER), PALETTE[0]);
         if (!result.filmCase().physics().isSemiInfinite()) {
@@ -135,9 +187,11 @@ public final class Plots {
 
     private static XYChart temperatureHistoryChart(FilmResult result) {
         History h = result.history();
-        double[] t = h.column(History.Column.TIME);
+        double[] seconds = h.column(History.Column.TIME);
+        TimeUnit unit = TimeUnit.forSpan(seconds[seconds.length - 1]);
+        double[] t = unit.scale(seconds);
         boolean logTime = t.length > 1 && t[0] > 0 && t[t.length - 1] / t[0] > 100;
-        XYChart chart = base("Film temperature", "time (s)", "temperature (K)");
+        XYChart chart = base("Film temperature", "time (" + unit.name() + ")", "temperature (K)");
         chart.getStyler().setXAxisLogarithmic(logTime);
         addLine(chart, "highest", t, h.column(History.Column.MAX_TEMPERATURE), PALETTE[1]);
         addLine(chart, "mean", t, h.column(History.Column.MEAN_TEMPERATURE), PALETTE[2]);

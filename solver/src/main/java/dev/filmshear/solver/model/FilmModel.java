@@ -64,7 +64,8 @@ public final class FilmModel implements FilmState {
         }
         double horizon = Double.isFinite(end) ? end : 1;
         double cellTime = momentumTimeScaleEstimate();
-        double firstStep = Math.min(horizon * 1e-3, 1e-3 * cellTime);
+        // too long a first step is cheap: the controller rejects it and shrinks it fivefold per attempt
+        double firstStep = Math.min(horizon * 1e-3, cellTime);
         // a step a million times shorter than the diffusion time of the finest cell resolves nothing more
         integrator.start(0, state, firstStep, 1e-6 * cellTime);
         current = true;
