@@ -18,7 +18,7 @@ import java.io.UncheckedIOException;
 @Command(name = "filmshear", mixinStandardHelpOptions = true, versionProvider = FilmshearCommand.VersionProvider.class,
         description = "Transient and steady shear flow and shear heating of thin viscous films between moving walls.",
         subcommands = {RunCommand.class, CheckCommand.class, DemoCommand.class, CommandLine.HelpCommand.class},
-        exitCodeListHeading = "%nExit codes:%n", exitCodeList = {})
+        exitCodeListHeading = "%nExit codes:%n", exitCodeList = {}, footer = "")
 public final class FilmshearCommand implements Runnable {
 
     @Option(names = "--debug", scope = CommandLine.ScopeType.INHERIT,
@@ -47,12 +47,21 @@ public final class FilmshearCommand implements Runnable {
         line.setErr(err);
         line.getCommandSpec().usageMessage().exitCodeList(exitCodeMap());
         line.setExecutionExceptionHandler((e, cmd, parseResult) -> handle(e, err, root.debug || debugRequested(args)));
+        line.getCommandSpec().usageMessage().footer("%n");
         line.setParameterExceptionHandler((ex, a) -> {
-            err.println("error: " + oneLine(ex.getMessage()));
-            ex.getCommandLine().usage(err, CommandLine.Help.Ansi.OFF);
+            err.println("error: " + oneLine(ex.getMessage()) + " (see: filmshear " + commandPath(ex.getCommandLine())
+                    + "--help)");
             return ExitCode.BAD_INPUT.code();
         });
         return line.execute(args);
+    }
+
+    private static String commandPath(CommandLine line) {
+        String path = "";
+        for (CommandLine c = line; c.getParent() != null; c = c.getParent()) {
+            path = c.getCommandName() + " " + path;
+        }
+        return path;
     }
 
     private static boolean debugRequested(String[] args) {

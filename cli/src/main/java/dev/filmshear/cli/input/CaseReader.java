@@ -177,9 +177,6 @@ public final class CaseReader {
             String title = root.string("title", defaultTitle(doc.fileName()));
             initialVelocity = initial.quantity("velocity", QuantityKind.VELOCITY, 0);
             initialTemperature = initial.quantity("temperature", QuantityKind.ABSOLUTE_TEMPERATURE, Double.NaN);
-            Horizon horizon = horizon();
-            double tolerance = time.quantity("tolerance", QuantityKind.DIMENSIONLESS, FilmCase.DEFAULT_TOLERANCE);
-
             JournalSpec journalSpec = journal.present() ? journal() : null;
             Domain domain = journalSpec != null
                     ? build(() -> new Domain.Gap(journalSpec.radialClearance()), p -> journal.key("radial_clearance"))
@@ -209,6 +206,8 @@ public final class CaseReader {
             }
 
             double gradient = pressure.quantity("gradient", QuantityKind.PRESSURE_GRADIENT, 0);
+            Horizon horizon = horizon();
+            double tolerance = time.quantity("tolerance", QuantityKind.DIMENSIONLESS, FilmCase.DEFAULT_TOLERANCE);
             GridSpec gridSpec = gridSpec();
             double[] outputTimes = outputTimes(horizon);
             boolean plots = output.bool("plots", false);
