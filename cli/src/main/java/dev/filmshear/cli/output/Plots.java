@@ -9,7 +9,6 @@ import org.knowm.xchart.XYChartBuilder;
 import org.knowm.xchart.XYSeries;
 import org.knowm.xchart.style.Styler;
 import org.knowm.xchart.style.XYStyler;
-import org.knowm.xchart.style.lines.SeriesLines;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 import java.awt.BasicStroke;
@@ -105,6 +104,7 @@ public final class Plots {
             return Math.abs(v - k * step) < 1e-6 * step ? new java.text.DecimalFormat("#,##0.###").format(k * step) : "";
         });
         int k = 0;
+        boolean anyExact = false;
         for (Snapshot s : profiles) {
             double[] y = s.y();
             double[] yMicro = new double[y.length];
@@ -118,19 +118,37 @@ public final class Plots {
             };
             Color color = PALETTE[k % PALETTE.length];
             String label = timeLabel(s.time());
-            XYSeries series = chart.addSeries(label, values, yMicro);
-            series.setMarker(SeriesMarkers.NONE);
-            series.setLineColor(color);
-            series.setLineStyle(new BasicStroke(2f));
-            if (analytic != null && field == Field.VELOCITY && analytic.appliesAt(s.time())) {
-                double[] exact = analytic.velocityProfile(s.time(), y);
-                XYSeries dashed = chart.addSeries(label + " exact", exact, yMicro);
-                dashed.setMarker(SeriesMarkers.NONE);
-                dashed.setLineColor(Color.BLACK);
-                dashed.setLineStyle(SeriesLines.DASH_DASH);
-                dashed.setShowInLegend(k == 0);
+            boolean exact = analytic != null && field == Field.VELOCITY && analytic.appliesAt(s.time());
+            if (exact) {
+                // computed values as symbols on a thinned set of nodes, the closed form as a thin line
+                anyExact = true;
+                XYSeries line = chart.addSeries(label + " (exact)", analytic.velocityProfile(s.time(), y), yMicro);
+                line.setMarker(SeriesMarkers.NONE);
+                line.setLineColor(color);
+                line.setLineStyle(new BasicStroke(1.2f));
+                line.setShowInLegend(false);
+                int stride = Math.max(1, y.length / 24);
+                int m = (y.length - 1) / stride + 1;
+                double[] xs = new double[m];
+                double[] ys = new double[m];
+                for (int j = 0; j < m; j++) {
+                    xs[j] = values[j * stride];
+                    ys[j] = yMicro[j * stride];
+                }
+                XYSeries symbols = chart.addSeries(label, xs, ys);
+                symbols.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);
+                symbols.setMarker(SeriesMarkers.CIRCLE);
+                symbols.setMarkerColor(color);
+            } else {
+                XYSeries series = chart.addSeries(label, values, yMicro);
+                series.setMarker(SeriesMarkers.NONE);
+                series.setLineColor(color);
+                series.setLineStyle(new BasicStroke(2f));
             }
             k++;
+        }
+        if (anyExact) {
+            chart.setTitle(title + " (symbols: computed, lines: closed-form solution)");
         }
         return chart;
     }

@@ -715,6 +715,35 @@ public final class FilmDiscretization implements ImplicitSystem {
         return true;
     }
 
+    /**
+     * Says which node makes {@code state} unusable (a temperature not above 0 K, a viscosity, density,
+     * specific heat or conductivity that is not a positive finite number), or returns null when none does.
+     */
+    public String describeUnusable(double[] state) {
+        for (int i = 0; i < n; i++) {
+            double t = thermal ? state[2 * i + 1] : physics.referenceTemperature();
+            String where = " at node " + i + " (y = " + y[i] + " m, T = " + t + " K)";
+            if (!(t > 0) || Double.isInfinite(t)) {
+                return "temperature " + t + " K" + where;
+            }
+            double m = viscosityLaw.mu(t);
+            if (!(m > 0) || Double.isInfinite(m)) {
+                return "viscosity " + m + " Pa*s from the " + viscosityLaw.name() + " law" + where;
+            }
+            double r = densityLaw.density(t);
+            if (!(r > 0)) {
+                return "density " + r + " kg/m^3 from the thermal expansion" + where;
+            }
+            if (thermal && !(specificHeatLaw.value(t) > 0)) {
+                return "specific heat " + specificHeatLaw.value(t) + " J/(kg*K)" + where;
+            }
+            if (thermal && !(conductivityLaw.value(t) > 0)) {
+                return "thermal conductivity " + conductivityLaw.value(t) + " W/(m*K)" + where;
+            }
+        }
+        return null;
+    }
+
     /** Viscosity (Pa s) at node {@code i}, as of the last {@link #update}. */
     public double viscosityAt(int i) {
         return mu[i];

@@ -55,12 +55,13 @@ public final class FilmModel implements FilmState {
                 : StepControl.Adaptive.of(filmCase.tolerance());
         this.integrator = new DirkIntegrator(discretization, options.scheme(), control);
         this.state = new double[discretization.size()];
-        // the state at t = 0 is the fluid before the start: walls still at the initial velocity, so the first
-        // rate holds no jump and an impulsive start enters through the stage boundary values only
+        // the state at t = 0+: the fluid as it was, the walls already at their starting velocities; an
+        // impulsive start is then a jump at the wall that the error estimate resolves with short first steps
         discretization.initialState(state);
+        discretization.applyPrescribed(0, state);
         if (!discretization.update(0, state)) {
-            throw new NumericalFailureException("the initial state gives no usable viscosity or density", 0, 0, -1,
-                    "temperature");
+            throw new NumericalFailureException("the initial state is outside the property laws: "
+                    + discretization.describeUnusable(state), 0, 0, -1, "temperature");
         }
         double horizon = Double.isFinite(end) ? end : 1;
         double cellTime = momentumTimeScaleEstimate();
@@ -196,8 +197,10 @@ public final class FilmModel implements FilmState {
     void refresh() {
         if (!current) {
             if (!discretization.update(integrator.time(), state)) {
-                throw new NumericalFailureException("temperature or property not usable after a step",
-                        integrator.time(), integrator.acceptedSteps(), -1, "temperature");
+                String what = discretization.describeUnusable(state);
+                throw new NumericalFailureException("the film left the range of its property laws: "
+                        + (what == null ? "a property is not usable" : what), integrator.time(),
+                        integrator.acceptedSteps(), -1, "temperature");
             }
             current = true;
         }

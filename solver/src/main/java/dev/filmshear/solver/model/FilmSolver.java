@@ -113,8 +113,16 @@ public final class FilmSolver {
                     model.heatFluxIntoUpperWall(), dissipated, conducted, stored, imbalance,
                     model.steps(), model.integrator().rejectedSteps(), model.integrator().newtonIterations());
         } catch (NumericalFailureException unusable) {
-            summary = new FilmSummary(false, model.time(), Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
-                    Double.NaN, Double.NaN, Double.NaN, Double.NaN, dissipated, conducted, stored, imbalance,
+            // the last state is outside the property laws: report the last recorded step instead
+            History h = recorder.history();
+            int last = h.size() - 1;
+            java.util.function.ToDoubleFunction<History.Column> at = c -> last >= 0 ? h.get(c, last) : Double.NaN;
+            summary = new FilmSummary(false, last >= 0 ? h.get(History.Column.TIME, last) : 0,
+                    at.applyAsDouble(History.Column.WALL_SHEAR_STRESS_LOWER),
+                    at.applyAsDouble(History.Column.WALL_SHEAR_STRESS_UPPER), Double.NaN, Double.NaN,
+                    at.applyAsDouble(History.Column.MAX_TEMPERATURE), at.applyAsDouble(History.Column.MEAN_TEMPERATURE),
+                    at.applyAsDouble(History.Column.DISSIPATION), at.applyAsDouble(History.Column.HEAT_FLUX_LOWER),
+                    at.applyAsDouble(History.Column.HEAT_FLUX_UPPER), dissipated, conducted, stored, imbalance,
                     model.steps(), model.integrator().rejectedSteps(), model.integrator().newtonIterations());
         }
         History history = recorder.history();

@@ -37,8 +37,12 @@ class ImpulsiveStartCouetteAgreementTest {
      * (pi dy / delta)^2 / 12 ~ 1e-3, far smaller at later times.
      */
     private static final double PROFILE_TOLERANCE = 2e-3;
-    /** Wall shear error allowed relative to mu U / h from tau = 0.05 on (the layer spans 20 nodes or more). */
-    private static final double SHEAR_TOLERANCE = 2e-4;
+    /**
+     * Wall shear error allowed relative to mu U / h from tau = 0.05 on: the one-sided three-point derivative
+     * errs by about dy^2 u''' / 3, which at tau = 0.05 on 201 nodes is 2.4e-4 mu U / h (measured; it falls
+     * fourfold with each halving of dy, see SpatialConvergenceTest).
+     */
+    private static final double SHEAR_TOLERANCE = 5e-4;
 
     private static FilmResult startUp() {
         FilmPhysics physics = FilmPhysics.isothermalCouette(GAP, DENSITY, VISCOSITY, new WallMotion.Steady(0),
