@@ -100,8 +100,8 @@ public final class CaseReader {
      * @param presets preset name to fluid
      */
     public CaseReader(Map<String, LawReader> laws, Map<String, FluidPreset> presets) {
-        this.laws = Map.copyOf(laws);
-        this.presets = Map.copyOf(presets);
+        this.laws = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(laws));
+        this.presets = java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(presets));
     }
 
     /** The viscosity laws this reader knows. */

@@ -33,11 +33,51 @@ public record FluidPreset(String name, String description, String fluidToml) {
     }
 
     /**
-     * The built-in presets, by name. Empty in this version; a preset is added here as one entry written
-     * in TOML.
+     * The built-in presets, by name, in the solver's order: each of
+     * {@link dev.filmshear.solver.physics.FluidPresets} written out as a {@code [fluid]} table, so the
+     * solver's records stay the one source of every preset's numbers.
      */
     public static Map<String, FluidPreset> standard() {
-        return Map.of();
+        Map<String, FluidPreset> presets = new java.util.LinkedHashMap<>();
+        for (dev.filmshear.solver.physics.FluidPreset p : dev.filmshear.solver.physics.FluidPresets.all()) {
+            presets.put(p.name(), new FluidPreset(p.name(), p.description(), render(p)));
+        }
+        return presets;
+    }
+
+    /** A solver preset as the body of a {@code [fluid]} table, every value with its SI unit. */
+    static String render(dev.filmshear.solver.physics.FluidPreset p) {
+        StringBuilder toml = new StringBuilder();
+        dev.filmshear.solver.physics.DensityLaw density = p.density();
+        toml.append("density = \"").append(density.reference()).append(" kg/m^3\"\n");
+        if (!density.isConstant()) {
+            toml.append("density_temperature = \"").append(density.referenceTemperature()).append(" K\"\n");
+            toml.append("thermal_expansion = \"").append(density.expansion()).append(" 1/K\"\n");
+        }
+        toml.append("specific_heat = \"").append(p.specificHeat().reference()).append(" J/(kg*K)\"\n");
+        toml.append("thermal_conductivity = \"").append(p.conductivity().reference()).append(" W/(m*K)\"\n");
+        toml.append("[viscosity]\n");
+        dev.filmshear.solver.physics.ViscosityLaw law = p.viscosity();
+        toml.append("law = \"").append(law.name()).append("\"\n");
+        if (law instanceof dev.filmshear.solver.physics.SutherlandViscosity s) {
+            toml.append("reference = \"").append(s.reference()).append(" Pa*s\"\n");
+            toml.append("reference_temperature = \"").append(s.referenceTemperature()).append(" K\"\n");
+            toml.append("constant = \"").append(s.constant()).append(" K\"\n");
+        } else if (law instanceof dev.filmshear.solver.physics.WaterViscosity w) {
+            toml.append("pressure = \"").append(w.pressure()).append(" Pa\"\n");
+            return toml.toString();
+        } else if (law instanceof dev.filmshear.solver.physics.WaltherViscosity w) {
+            double t1 = 313.15;
+            double t2 = 373.15;
+            toml.append("temperatures = [\"").append(t1).append(" K\", \"").append(t2).append(" K\"]\n");
+            toml.append("values = [\"").append(w.kinematicViscosity(t1)).append(" m^2/s\", \"")
+                    .append(w.kinematicViscosity(t2)).append(" m^2/s\"]\n");
+        } else {
+            throw new IllegalStateException("no TOML form for the preset law " + law.name());
+        }
+        toml.append("valid_from = \"").append(law.validFrom()).append(" K\"\n");
+        toml.append("valid_to = \"").append(law.validTo()).append(" K\"\n");
+        return toml.toString();
     }
 
     /** The preset's {@code [fluid]} table as a fresh tree. */

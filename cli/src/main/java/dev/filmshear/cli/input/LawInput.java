@@ -132,9 +132,11 @@ public final class LawInput {
             return constructor.get();
         } catch (InvalidParameterException e) {
             String name = e.parameter();
-            String key = table.has(name) ? table.key(name) : table.path();
+            int bracket = name.indexOf('[');
+            String base = bracket > 0 ? name.substring(0, bracket) : name;
+            String key = table.has(base) ? table.key(base) + name.substring(base.length()) : table.path();
             String given = table.has(name) ? table.written(name) : e.given();
-            TomlDocument.Location where = table.doc().location(key);
+            TomlDocument.Location where = table.doc().location(table.has(base) ? table.key(base) : key);
             throw new InputException(where.file(), where.line(), key, "value not allowed", given, e.allowed(), e);
         }
     }

@@ -152,12 +152,30 @@ class CaseReaderTest {
     }
 
     @Test
-    void withoutTheStandInRegistriesTheExampleNamesItsPreset() throws URISyntaxException {
-        InputException e = assertThrows(InputException.class,
-                () -> new CaseReader().read(resource("contract-example.toml")));
-        assertEquals("fluid.preset", e.key());
-        assertEquals(11, e.line());
-        assertTrue(e.allowed().contains("no built-in fluids"), e.oneLine());
+    void theStandardRegistriesReadTheContractExampleWithTheRealVogelLawAndWaterPreset() throws URISyntaxException {
+        CaseFile c = new CaseReader().read(resource("contract-example.toml"));
+        dev.filmshear.solver.physics.VogelViscosity vogel = assertInstanceOf(
+                dev.filmshear.solver.physics.VogelViscosity.class, c.filmCase().physics().fluid().viscosity());
+        assertClose(5.264e-5, vogel.a());
+        assertClose(948, vogel.b());
+        assertClose(170, vogel.c());
+        // the case's own keys replace the water preset's
+        assertClose(860, c.filmCase().physics().fluid().density().reference());
+    }
+
+    @Test
+    void everyPresetIsReadBackToTheSolversOwnLaw() {
+        for (dev.filmshear.solver.physics.FluidPreset preset : dev.filmshear.solver.physics.FluidPresets.all()) {
+            CaseFile c = read(MINIMAL.replace("[fluid]", "[fluid]\npreset = \"" + preset.name() + "\"")
+                    .replace("density = \"860 kg/m^3\"\n", "")
+                    .replaceAll("\\[fluid\\.viscosity\\][^\\[]*", "")
+                    + "[initial]\ntemperature = \"40 degC\"\n");
+            double t = 313.15;
+            assertEquals(preset.viscosity().mu(t), c.filmCase().physics().fluid().viscosity().mu(t),
+                    1e-12 * preset.viscosity().mu(t), preset.name());
+            assertEquals(preset.density().density(t), c.filmCase().physics().fluid().density().density(t),
+                    1e-12 * preset.density().density(t), preset.name());
+        }
     }
 
     @Test
@@ -325,8 +343,8 @@ class CaseReaderTest {
     @Test
     void theLawRegistryIsOpen() {
         CaseReader reader = new CaseReader();
-        assertEquals(java.util.Set.of("constant"), reader.laws().keySet());
-        assertTrue(ViscosityLaws.CONTRACT_LAWS.containsAll(reader.laws().keySet()));
-        assertTrue(reader.presets().isEmpty());
+        assertEquals(java.util.Set.copyOf(ViscosityLaws.CONTRACT_LAWS), reader.laws().keySet(),
+                "every law of the contract is registered");
+        assertEquals(dev.filmshear.solver.physics.FluidPresets.names(), java.util.List.copyOf(reader.presets().keySet()));
     }
 }
