@@ -87,12 +87,18 @@ final class CheckCommand implements Callable<Integer> {
         } else {
             out.printf("  truncated depth     %.6g m%n", n.depth());
         }
-        if (!Double.isNaN(n.penetrationDepth())) {
+        if (p.isSemiInfinite() && !Double.isNaN(n.penetrationDepth())) {
             out.printf("  penetration depth   %.6g m%n", n.penetrationDepth());
         }
         if (p.isThermal()) {
             out.printf("  thermal time scale  %.6g s (gap^2/alpha), Prandtl number %.6g%n", n.thermalTimeScale(),
                     n.prandtlNumber());
+            out.printf("  Nahme number        %.6g (beta mu U^2 / k, beta = %.4g 1/K)%n", n.nahmeNumber(),
+                    n.viscosityTemperatureCoefficient());
+            if (!Double.isNaN(n.brinkmanNumber())) {
+                out.printf("  Brinkman number     %.6g (mu U^2 / (k dT_walls))%n", n.brinkmanNumber());
+            }
+            out.printf("  shear-heating rise  %.6g K at constant viscosity (BSL section 10.4)%n", n.shearHeatingRise());
         }
         boolean anyWarning = false;
         if (n.laminarFlowDoubtful()) {

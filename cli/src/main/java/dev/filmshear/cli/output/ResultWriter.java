@@ -121,6 +121,10 @@ public final class ResultWriter {
         number(root, "thermal_time_scale_s", n.thermalTimeScale());
         number(root, "prandtl_number", n.prandtlNumber());
         number(root, "penetration_depth_m", n.penetrationDepth());
+        number(root, "viscosity_temperature_coefficient_per_K", n.viscosityTemperatureCoefficient());
+        number(root, "nahme_number", n.nahmeNumber());
+        number(root, "brinkman_number", n.brinkmanNumber());
+        number(root, "shear_heating_rise_K", n.shearHeatingRise());
         if (info.analytic() != null) {
             info.analytic().addTo(root.putObject("analytic"));
         }

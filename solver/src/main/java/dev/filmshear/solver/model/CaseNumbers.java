@@ -2,6 +2,7 @@ package dev.filmshear.solver.model;
 
 import dev.filmshear.solver.physics.FilmPhysics;
 import dev.filmshear.solver.physics.Fluid;
+import dev.filmshear.solver.physics.ThermalCondition;
 import dev.filmshear.solver.physics.WallMotion;
 
 /**
@@ -24,11 +25,20 @@ import dev.filmshear.solver.physics.WallMotion;
  * @param prandtlNumber nu / alpha; NaN for an isothermal film
  * @param penetrationDepth sqrt(nu t_end) for a transient case, the Stokes-layer depth sqrt(2 nu / omega)
  *     for an oscillating wall if larger (m); NaN for a steady case
+ * @param viscosityTemperatureCoefficient beta = -(d mu / dT) / mu at the reference temperature (1/K)
+ * @param nahmeNumber Na = beta mu U^2 / k, how strongly shear heating thins the oil (R. Nahme, Ing.-Arch. 11
+ *     (1940) 191, from memory; definition as in the project's reference sheet, section 7(g)); NaN when isothermal
+ * @param brinkmanNumber Br = mu U^2 / (k |T_upper - T_lower|) for walls at two fixed temperatures (R. B. Bird,
+ *     W. E. Stewart, E. N. Lightfoot, <i>Transport Phenomena</i>, 2nd ed., 2002, section 10.4); NaN otherwise
+ * @param shearHeatingRise the temperature rise shear heating would cause at constant viscosity: mu U^2 / (8 k)
+ *     when both walls take heat away, mu U^2 / (2 k) when only one does (BSL section 10.4) (K); NaN when
+ *     isothermal
  */
 public record CaseNumbers(double referenceTemperature, double density, double viscosity, double kinematicViscosity,
                           double gap, double depth, double relativeSpeed, double reynoldsNumber,
                           double momentumTimeScale, double momentumTimeScaleAnalytic, double thermalTimeScale,
-                          double prandtlNumber, double penetrationDepth) {
+                          double prandtlNumber, double penetrationDepth, double viscosityTemperatureCoefficient,
+                          double nahmeNumber, double brinkmanNumber, double shearHeatingRise) {
 
     /**
      * Reynolds number U c / nu (full gap, full wall-speed difference) above which a plane Couette film
@@ -73,8 +83,30 @@ public record CaseNumbers(double referenceTemperature, double density, double vi
         double alpha = physics.isThermal() ? fluid.thermalDiffusivity(t0) : Double.NaN;
         double thermal = physics.isThermal() && !physics.isSemiInfinite() ? gap * gap / alpha : Double.NaN;
         double prandtl = physics.isThermal() ? nu / alpha : Double.NaN;
+        double beta = -fluid.viscosity().dMuDT(t0) / mu;
+        double nahme = Double.NaN;
+        double brinkman = Double.NaN;
+        double rise = Double.NaN;
+        if (physics.isThermal()) {
+            double k = fluid.conductivity().value(t0);
+            nahme = beta * mu * speed * speed / k;
+            if (physics.upper() != null
+                    && physics.lower().thermal() instanceof ThermalCondition.FixedTemperature lowerT
+                    && physics.upper().thermal() instanceof ThermalCondition.FixedTemperature upperT
+                    && lowerT.temperature() != upperT.temperature()) {
+                brinkman = mu * speed * speed / (k * Math.abs(upperT.temperature() - lowerT.temperature()));
+            }
+            int sinks = 0;
+            for (var wall : new dev.filmshear.solver.physics.Wall[] {physics.lower(), physics.upper()}) {
+                if (wall != null && !(wall.thermal() instanceof ThermalCondition.HeatFlux)) {
+                    sinks++;
+                }
+            }
+            rise = sinks == 2 ? mu * speed * speed / (8 * k) : sinks == 1 ? mu * speed * speed / (2 * k)
+                    : Double.POSITIVE_INFINITY;
+        }
         return new CaseNumbers(t0, rho, mu, nu, gap, depth, speed, reynolds, tm, tmAnalytic, thermal, prandtl,
-                penetration);
+                penetration, beta, nahme, brinkman, rise);
     }
 
     /** True when the Reynolds number of a film in a gap is above {@link #LAMINAR_REYNOLDS_LIMIT}. */
