@@ -72,6 +72,13 @@ final class CheckCommand implements Callable<Integer> {
         out.printf("  time                %s, tolerance %s%n",
                 c.isSteady() ? "steady solve" : "to " + c.endTime() + " s", c.tolerance());
         out.printf("  grid                %d points, clustering %s%n", c.grid().points(), c.grid().clustering());
+        if (c.isJournal()) {
+            out.printf("  journal             diameter %s m, length %s m, film area %.6g m^2%n",
+                    c.journal().diameter(), c.journal().length(), c.journal().area());
+        }
+        if (!Double.isNaN(c.limits().maxTemperature())) {
+            out.printf("  temperature limit   %s K%n", c.limits().maxTemperature());
+        }
         out.printf("  output times        %s s%n", Arrays.toString(c.outputTimes()));
 
         CaseNumbers n = CaseNumbers.of(c);
@@ -100,7 +107,28 @@ final class CheckCommand implements Callable<Integer> {
             }
             out.printf("  shear-heating rise  %.6g K at constant viscosity (BSL section 10.4)%n", n.shearHeatingRise());
         }
+        if (!Double.isNaN(n.drivenWallTimeScale())) {
+            out.printf("  driven-wall time    %.6g s (mass per area * gap / mu: coast-down time constant)%n",
+                    n.drivenWallTimeScale());
+        }
         boolean anyWarning = false;
+        if (c.isJournal()) {
+            double ratio = p.gap() / c.journal().radius();
+            double ta = Math.pow(n.reynoldsNumber(), 2) * ratio;
+            out.printf("  clearance/radius    %.4g (warning above %.3g)%n", ratio,
+                    dev.filmshear.solver.model.FilmSolver.CURVATURE_LIMIT);
+            out.printf("  Taylor number       %.4g at the start (critical %.0f)%n", ta,
+                    dev.filmshear.solver.model.FilmSolver.TAYLOR_LIMIT);
+            if (ratio > dev.filmshear.solver.model.FilmSolver.CURVATURE_LIMIT) {
+                out.printf("warning: clearance/radius %.4g is too large for the unwrapped-film model%n", ratio);
+                anyWarning = true;
+            }
+            if (ta > dev.filmshear.solver.model.FilmSolver.TAYLOR_LIMIT) {
+                out.printf("warning: Taylor number %.4g above %.0f: Taylor vortices expected%n", ta,
+                        dev.filmshear.solver.model.FilmSolver.TAYLOR_LIMIT);
+                anyWarning = true;
+            }
+        }
         if (n.laminarFlowDoubtful()) {
             out.printf("warning: Reynolds number %.4g above %.0f: the film may not stay laminar%n",
                     n.reynoldsNumber(), CaseNumbers.LAMINAR_REYNOLDS_LIMIT);
@@ -130,6 +158,10 @@ final class CheckCommand implements Callable<Integer> {
         if (m instanceof WallMotion.Sine s) {
             return "sine: " + s.mean() + " + " + s.amplitude() + " sin(2 pi " + s.frequency() + " t + " + s.phase()
                     + ") m/s";
+        }
+        if (m instanceof WallMotion.Driven d) {
+            return "driven: mass " + d.massPerArea() + " kg/m^2, drive " + d.drive() + " Pa, starting at "
+                    + d.initialVelocity() + " m/s";
         }
         WallMotion.Table t = (WallMotion.Table) m;
         return "table of " + t.times().length + " points, " + Arrays.toString(t.values()) + " m/s at "

@@ -8,7 +8,10 @@ import dev.filmshear.solver.model.FilmCase;
 import dev.filmshear.solver.model.GridSpec;
 import dev.filmshear.solver.model.Horizon;
 import dev.filmshear.solver.physics.ConstantViscosity;
+import dev.filmshear.solver.model.Limits;
 import dev.filmshear.solver.physics.DensityLaw;
+import dev.filmshear.solver.physics.Drive;
+import dev.filmshear.solver.physics.JournalGeometry;
 import dev.filmshear.solver.physics.Domain;
 import dev.filmshear.solver.physics.FilmPhysics;
 import dev.filmshear.solver.physics.Fluid;
@@ -70,7 +73,7 @@ import java.util.function.Supplier;
 public final class CaseReader {
 
     static final List<String> ROOT_KEYS = List.of("title", "geometry", "journal", "fluid", "lower_wall",
-            "upper_wall", "pressure", "initial", "time", "grid", "output");
+            "upper_wall", "pressure", "initial", "time", "grid", "output", "limits");
     static final String[] GEOMETRY_KEYS = {"gap", "semi_infinite", "depth"};
     static final String[] JOURNAL_KEYS = {"diameter", "length", "radial_clearance", "speed"};
     static final List<String> FLUID_KEYS = List.of("preset", "density", "specific_heat", "thermal_conductivity",
@@ -81,8 +84,18 @@ public final class CaseReader {
             "constant", List.of("kind", "value"),
             "ramp", List.of("kind", "to", "duration", "from", "start"),
             "sine", List.of("kind", "amplitude", "frequency", "mean", "phase"),
-            "table", List.of("kind", "times", "values"));
-    private static final String MOTION_KINDS = "kind = \"constant\", \"ramp\", \"sine\" or \"table\"";
+            "table", List.of("kind", "times", "values"),
+            "driven", List.of("kind", "mass", "force", "initial", "coast_down_fraction"));
+    /** The keys of a driven journal's speed table: rotor inertia and torque instead of mass and force. */
+    static final List<String> DRIVEN_JOURNAL_KEYS = List.of("kind", "inertia", "torque", "initial",
+            "coast_down_fraction");
+    static final Map<String, List<String>> DRIVE_KEYS = Map.of(
+            "table", List.of("kind", "times", "values"),
+            "curve", List.of("kind", "speeds", "values"));
+    private static final String MOTION_KINDS =
+            "kind = \"constant\", \"ramp\", \"sine\", \"table\" or \"driven\"";
+    /** Fraction of its initial speed whose time a coasting wall reports when the case does not say. */
+    static final double DEFAULT_COAST_DOWN_FRACTION = 0.1;
     private static final String STEADY = "steady";
 
     private final Map<String, LawReader> laws;
@@ -153,6 +166,9 @@ public final class CaseReader {
         private Section time;
         private Section grid;
         private Section output;
+        private Section limits;
+        private double viscosityAtStart = Double.NaN;
+        private double gapForEstimates = Double.NaN;
         private double initialVelocity;
         private double initialTemperature;
 
@@ -173,22 +189,28 @@ public final class CaseReader {
             time = root.table("time", "end", "tolerance");
             grid = root.table("grid", "points", "clustering");
             output = root.table("output", "times", "plots");
+            limits = root.table("limits", "max_temperature");
 
             String title = root.string("title", defaultTitle(doc.fileName()));
             initialVelocity = initial.quantity("velocity", QuantityKind.VELOCITY, 0);
             initialTemperature = initial.quantity("temperature", QuantityKind.ABSOLUTE_TEMPERATURE, Double.NaN);
             JournalSpec journalSpec = journal.present() ? journal() : null;
+            final JournalSpec journalForDomain = journalSpec;
             Domain domain = journalSpec != null
-                    ? build(() -> new Domain.Gap(journalSpec.radialClearance()), p -> journal.key("radial_clearance"))
+                    ? build(() -> new Domain.Gap(journalForDomain.radialClearance()), p -> journal.key("radial_clearance"))
                     : domain();
             boolean finite = domain instanceof Domain.Gap;
-            WallMotion lowerMotion = motion(lower, "velocity", QuantityKind.VELOCITY, initialVelocity);
-            WallMotion upperMotion = journalSpec != null ? journalSpec.shaftMotion()
-                    : finite ? motion(upper, "velocity", QuantityKind.VELOCITY, initialVelocity) : null;
-
             Section fluid = fluidWithPreset();
             DensityLaw density = density(fluid);
             ViscosityLaw viscosity = viscosity(fluid, density);
+            viscosityAtStart = viscosity.mu(Double.isNaN(initialTemperature) ? 293.15 : initialTemperature);
+            gapForEstimates = domain instanceof Domain.Gap g ? g.gap() : Double.NaN;
+            if (journalSpec != null && journalSpec.speed() instanceof WallMotion.Driven) {
+                journalSpec = drivenJournal(journalSpec);
+            }
+            WallMotion lowerMotion = motion(lower, "velocity", QuantityKind.VELOCITY, initialVelocity);
+            WallMotion upperMotion = journalSpec != null ? journalSpec.shaftMotion()
+                    : finite ? motion(upper, "velocity", QuantityKind.VELOCITY, initialVelocity) : null;
 
             ThermalCondition lowerThermal = thermal(lower);
             ThermalCondition upperThermal = finite ? thermal(upper) : null;
@@ -221,7 +243,13 @@ public final class CaseReader {
                             v0, t0, null, null),
                     keys(Map.of("gradient", pressure.key("gradient"), "velocity", initial.key("velocity"),
                             "temperature", initial.key("temperature")), "initial"));
-            FilmCase filmCase = build(() -> new FilmCase(physics, horizon, gridSpec, tolerance, outputTimes),
+            double maxTemperature = limits.quantity("max_temperature", QuantityKind.ABSOLUTE_TEMPERATURE, Double.NaN);
+            Limits caseLimits = build(() -> new Limits(maxTemperature), p -> limits.key("max_temperature"));
+            JournalSpec finalJournal = journalSpec;
+            JournalGeometry geometry = finalJournal == null ? null
+                    : new JournalGeometry(finalJournal.diameter(), finalJournal.length());
+            FilmCase filmCase = build(() -> new FilmCase(physics, horizon, gridSpec, tolerance, outputTimes,
+                            geometry, caseLimits),
                     keys(Map.of("tolerance", time.key("tolerance"), "times", output.key("times"),
                             "end", time.key("end")), "time"));
             return new CaseFile(doc.fileName(), title, filmCase, plots, doc, journalSpec);
@@ -328,7 +356,8 @@ public final class CaseReader {
                 table.allowOnly(all);
                 throw table.missing("kind", MOTION_KINDS);
             }
-            List<String> allowed = MOTION_KEYS.get(kindName);
+            List<String> allowed = "driven".equals(kindName) && kind == QuantityKind.ROTATIONAL_SPEED
+                    ? DRIVEN_JOURNAL_KEYS : MOTION_KEYS.get(kindName);
             if (allowed == null) {
                 throw table.error("kind", "unknown kind of motion \"" + kindName + "\"", table.written("kind"),
                         MOTION_KINDS);
@@ -354,10 +383,133 @@ public final class CaseReader {
                     double phase = table.quantity("phase", QuantityKind.ANGLE, 0);
                     return build(() -> new WallMotion.Sine(mean, amplitude, frequency, phase), keyOf);
                 }
+                case "driven" -> {
+                    if (kind == QuantityKind.ROTATIONAL_SPEED) {
+                        // a driven shaft: read in drivenJournal once the journal's geometry is known
+                        return pendingDrivenJournal(table, defaultFrom);
+                    }
+                    return drivenWall(table, defaultFrom);
+                }
                 default -> {
                     return tableMotion(table, kind, keyOf);
                 }
             }
+        }
+
+        /**
+         * A plane wall with inertia and a drive: {@code mass} per unit area, {@code force} per unit area
+         * (constant, {@code { kind = "table", times, values }} in time or {@code { kind = "curve", speeds,
+         * values }} against the wall's speed), {@code initial} velocity, {@code coast_down_fraction}.
+         */
+        private WallMotion drivenWall(Section table, double defaultInitial) {
+            double mass = table.quantity("mass", QuantityKind.AREAL_MASS);
+            double initial = table.quantity("initial", QuantityKind.VELOCITY, defaultInitial);
+            double fraction = table.quantity("coast_down_fraction", QuantityKind.DIMENSIONLESS,
+                    DEFAULT_COAST_DOWN_FRACTION);
+            Drive drive = drive(table, "force", QuantityKind.FORCE_PER_AREA, QuantityKind.VELOCITY, 1, 1);
+            double estimate = speedEstimate(drive, initial);
+            return build(() -> new WallMotion.Driven(mass, drive, initial, estimate, fraction),
+                    p -> table.key(switch (p) {
+                        case "initial", "coast_down_fraction", "mass" -> p;
+                        default -> "force";
+                    }));
+        }
+
+        /** The section of a driven journal's speed, kept until the journal's geometry is read. */
+        private Section pendingJournalSpeed;
+        private double pendingJournalInitial;
+
+        private WallMotion pendingDrivenJournal(Section table, double defaultInitial) {
+            pendingJournalSpeed = table;
+            pendingJournalInitial = defaultInitial;
+            table.allowOnly(DRIVEN_JOURNAL_KEYS);
+            // a placeholder carrying only the kind; drivenJournal replaces it
+            return new WallMotion.Driven(1, new Drive.Constant(0), 0, 0, DEFAULT_COAST_DOWN_FRACTION);
+        }
+
+        /**
+         * A driven shaft: rotor {@code inertia} I and {@code torque} Q (constant, a time table, or a motor curve
+         * against speed in rpm), turned into the film's terms with the shaft radius R and film area A:
+         * mass per area I / (R^2 A), force per area Q / (R A), surface speed pi D n.
+         */
+        private JournalSpec drivenJournal(JournalSpec spec) {
+            Section table = pendingJournalSpeed;
+            double radius = spec.radius();
+            double area = Math.PI * spec.diameter() * spec.length();
+            double inertia = table.quantity("inertia", QuantityKind.MOMENT_OF_INERTIA);
+            double initialRevs = table.quantity("initial", QuantityKind.ROTATIONAL_SPEED, pendingJournalInitial);
+            double fraction = table.quantity("coast_down_fraction", QuantityKind.DIMENSIONLESS,
+                    DEFAULT_COAST_DOWN_FRACTION);
+            Drive drive = drive(table, "torque", QuantityKind.TORQUE, QuantityKind.ROTATIONAL_SPEED,
+                    1 / (radius * area), spec.circumference());
+            double initial = initialRevs * spec.circumference();
+            double estimate = speedEstimate(drive, initial);
+            WallMotion.Driven shaft = build(() -> new WallMotion.Driven(inertia / (radius * radius * area), drive,
+                    initial, estimate, fraction), p -> table.key(switch (p) {
+                        case "initial", "coast_down_fraction" -> p;
+                        case "mass" -> "inertia";
+                        default -> "torque";
+                    }));
+            return build(() -> new JournalSpec(spec.diameter(), spec.length(), spec.radialClearance(), shaft),
+                    journal::key);
+        }
+
+        /**
+         * A drive read from key {@code name}: a constant quantity of {@code kind}, or an inline table of kind
+         * "table" (times, values) or "curve" (speeds of {@code speedKind}, values). Values are multiplied by
+         * {@code forceFactor} and speeds by {@code speedFactor} into force per area (Pa) and wall speed (m/s).
+         */
+        private Drive drive(Section owner, String name, QuantityKind kind, QuantityKind speedKind, double forceFactor,
+                            double speedFactor) {
+            JsonNode node = owner.raw(name);
+            if (node == null) {
+                throw owner.missing(name, kind.expectation() + ", or { kind = \"table\", times = [...], values = [...] }"
+                        + " or { kind = \"curve\", speeds = [...], values = [...] }");
+            }
+            if (!node.isObject()) {
+                double value = owner.quantity(name, kind) * forceFactor;
+                return build(() -> new Drive.Constant(value), p -> owner.key(name));
+            }
+            Section table = owner.table(name);
+            String kindName = table.string("kind", null);
+            List<String> allowed = kindName == null ? null : DRIVE_KEYS.get(kindName);
+            if (allowed == null) {
+                throw kindName == null ? table.missing("kind", "kind = \"table\" or \"curve\"")
+                        : table.error("kind", "unknown kind of drive \"" + kindName + "\"", table.written("kind"),
+                        "kind = \"table\" (against time) or \"curve\" (against speed)");
+            }
+            table.allowOnly(allowed);
+            String axis = kindName.equals("table") ? "times" : "speeds";
+            double[] x = table.quantities(axis, kindName.equals("table") ? QuantityKind.TIME : speedKind);
+            double[] f = table.quantities("values", kind);
+            if (f.length != x.length) {
+                throw table.error("values", f.length + " values for " + x.length + " " + axis, table.written("values"),
+                        "one value per point");
+            }
+            for (int i = 0; i < f.length; i++) {
+                f[i] *= forceFactor;
+                if (kindName.equals("curve")) {
+                    x[i] *= speedFactor;
+                }
+            }
+            return build(() -> kindName.equals("table") ? new Drive.TimeTable(x, f) : new Drive.SpeedCurve(x, f),
+                    p -> table.key(p.startsWith("values") ? "values" : axis));
+        }
+
+        /**
+         * An estimate of the speed a driven wall reaches, for error scaling only: the speed at which a
+         * Couette film of the initial viscosity balances the largest force, or a motor curve's top speed.
+         */
+        private double speedEstimate(Drive drive, double initial) {
+            double estimate = Math.abs(initial);
+            if (drive instanceof Drive.SpeedCurve curve) {
+                for (double u : curve.speeds()) {
+                    estimate = Math.max(estimate, Math.abs(u));
+                }
+            } else if (gapForEstimates > 0 && viscosityAtStart > 0) {
+                estimate = Math.max(estimate, drive.maxForce() * gapForEstimates / viscosityAtStart);
+            }
+            return estimate;
         }
 
         private WallMotion tableMotion(Section table, QuantityKind kind, Function<String, String> keyOf) {

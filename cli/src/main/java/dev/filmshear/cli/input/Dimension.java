@@ -34,6 +34,8 @@ public record Dimension(int m, int kg, int s, int k) {
     public static final Dimension FORCE = new Dimension(1, 1, -2, 0);
     public static final Dimension ENERGY = new Dimension(2, 1, -2, 0);
     public static final Dimension POWER = new Dimension(2, 1, -3, 0);
+    public static final Dimension AREAL_MASS = new Dimension(-2, 1, 0, 0);
+    public static final Dimension MOMENT_OF_INERTIA = new Dimension(2, 1, 0, 0);
 
     /** Words for the dimensions a user meets, for messages ("m is a length"). */
     private static final Map<Dimension, String> NOUNS = Map.ofEntries(

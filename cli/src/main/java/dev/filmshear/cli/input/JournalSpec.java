@@ -48,6 +48,9 @@ public record JournalSpec(double diameter, double length, double radialClearance
 
     /** A motion with every velocity multiplied by {@code factor} and its times unchanged. */
     static WallMotion scale(WallMotion motion, double factor) {
+        if (motion instanceof WallMotion.Driven d) {
+            return d; // a driven shaft is built in surface units already (CaseReader.drivenJournal)
+        }
         if (motion instanceof WallMotion.Steady s) {
             return new WallMotion.Steady(s.velocity() * factor);
         }

@@ -41,7 +41,11 @@ public enum QuantityKind {
     HEAT_TRANSFER_COEFFICIENT("a heat-transfer coefficient", "W/(m^2*K)", Dimension.HEAT_TRANSFER_COEFFICIENT,
             "800 W/(m^2*K)"),
     PRESSURE_GRADIENT("a pressure gradient", "Pa/m", Dimension.PRESSURE_GRADIENT, "-2e6 Pa/m"),
-    PRESSURE("a pressure", "Pa", Dimension.PRESSURE, "0.101325 MPa");
+    PRESSURE("a pressure", "Pa", Dimension.PRESSURE, "0.101325 MPa"),
+    FORCE_PER_AREA("a force per unit wall area", "Pa", Dimension.PRESSURE, "2 kPa"),
+    AREAL_MASS("a mass per unit wall area", "kg/m^2", Dimension.AREAL_MASS, "3 kg/m^2"),
+    MOMENT_OF_INERTIA("a moment of inertia", "kg*m^2", Dimension.MOMENT_OF_INERTIA, "0.02 kg*m^2"),
+    TORQUE("a torque", "N*m", Dimension.ENERGY, "1.5 N*m");
 
     private final String noun;
     private final String siUnit;

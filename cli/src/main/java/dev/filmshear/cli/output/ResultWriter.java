@@ -98,6 +98,11 @@ public final class ResultWriter {
         for (Warning w : result.warnings()) {
             codes.add(w.code());
         }
+        if (result.filmCase().isJournal()) {
+            number(root, "friction_torque_N_m", s.frictionTorque());
+            number(root, "friction_power_W", s.frictionPower());
+            number(root, "petroff_torque_N_m", s.petroffTorque());
+        }
         root.put("steps", s.steps());
         root.put("rejected_steps", s.rejectedSteps());
         root.put("newton_iterations", s.newtonIterations());
@@ -125,6 +130,10 @@ public final class ResultWriter {
         number(root, "nahme_number", n.nahmeNumber());
         number(root, "brinkman_number", n.brinkmanNumber());
         number(root, "shear_heating_rise_K", n.shearHeatingRise());
+        number(root, "driven_wall_time_scale_s", n.drivenWallTimeScale());
+        number(root, "time_to_99_percent_speed_s", s.speedRiseTime());
+        number(root, "coast_down_time_s", s.coastDownTime());
+        number(root, "max_temperature_limit_K", result.filmCase().limits().maxTemperature());
         if (info.analytic() != null) {
             info.analytic().addTo(root.putObject("analytic"));
         }

@@ -4,6 +4,7 @@ import dev.filmshear.solver.grid.FilmGrid;
 import dev.filmshear.solver.linalg.BlockTridiagonalSolver;
 import dev.filmshear.solver.linalg.TridiagonalSolver;
 import dev.filmshear.solver.physics.DensityLaw;
+import dev.filmshear.solver.physics.Drive;
 import dev.filmshear.solver.physics.FilmPhysics;
 import dev.filmshear.solver.physics.PropertyLaw;
 import dev.filmshear.solver.physics.ThermalCondition;
@@ -75,6 +76,13 @@ public final class FilmDiscretization implements ImplicitSystem {
     private final ThermalCondition lowerThermal;
     private final ThermalCondition upperThermal;
     private final boolean upperVelocityPrescribed;
+    private final boolean lowerVelocityPrescribed;
+    /** The driven wall at node 0, or null. */
+    private final WallMotion.Driven lowerDriven;
+    /** The driven wall at the last node, or null. */
+    private final WallMotion.Driven upperDriven;
+    /** True when a drive depends on the wall's speed, which makes even the momentum equation nonlinear. */
+    private final boolean speedDependentDrive;
     private final boolean lowerTemperaturePrescribed;
     private final boolean upperTemperaturePrescribed;
     private final double pressureGradient;
@@ -121,6 +129,8 @@ public final class FilmDiscretization implements ImplicitSystem {
     /** 1 for time stepping; 0 for the steady equations, which drop the storage term. */
     private double massWeight = 1;
     private double factoredMassWeight = Double.NaN;
+    /** The time of the stage being assembled (for time-dependent drives). */
+    private double currentTime;
     /** Steady continuation parameter: scales wall speeds and the pressure gradient; NaN when time stepping. */
     private double steadyLambda = Double.NaN;
 
@@ -152,7 +162,12 @@ public final class FilmDiscretization implements ImplicitSystem {
         this.conductivityLaw = physics.fluid().conductivity();
         this.lowerMotion = physics.lower().motion();
         this.upperMotion = physics.upper() == null ? null : physics.upper().motion();
-        this.upperVelocityPrescribed = upperMotion != null;
+        this.upperVelocityPrescribed = upperMotion != null && upperMotion.isPrescribed();
+        this.lowerVelocityPrescribed = lowerMotion.isPrescribed();
+        this.lowerDriven = lowerMotion instanceof WallMotion.Driven d ? d : null;
+        this.upperDriven = upperMotion instanceof WallMotion.Driven d ? d : null;
+        this.speedDependentDrive = (lowerDriven != null && lowerDriven.drive() instanceof Drive.SpeedCurve)
+                || (upperDriven != null && upperDriven.drive() instanceof Drive.SpeedCurve);
         this.lowerThermal = thermal ? physics.lower().thermal() : null;
         this.upperThermal = thermal
                 ? (physics.upper() == null ? ThermalCondition.HeatFlux.ADIABATIC : physics.upper().thermal()) : null;
@@ -161,7 +176,7 @@ public final class FilmDiscretization implements ImplicitSystem {
         this.pressureGradient = physics.pressureGradient();
         this.momentumSource = physics.momentumSource();
         this.heatSource = physics.heatSource();
-        this.linear = !thermal;
+        this.linear = !thermal && !speedDependentDrive;
         this.velocityScale = velocityScale > 0 ? velocityScale : 1;
         this.temperatureScale = temperatureScale > 0 ? temperatureScale : 1;
 
@@ -204,7 +219,7 @@ public final class FilmDiscretization implements ImplicitSystem {
             for (int i = 0; i < n; i++) {
                 mu[i] = mu0;
                 rho[i] = rho0;
-                massU[i] = rho0 * volume[i];
+                massU[i] = rho0 * volume[i] + wallMass(i);
             }
             for (int j = 0; j < n - 1; j++) {
                 muFace[j] = mu0;
@@ -261,6 +276,12 @@ public final class FilmDiscretization implements ImplicitSystem {
                 state[stride * i + 1] = physics.initialTemperature();
             }
         }
+        if (lowerDriven != null) {
+            state[0] = lowerDriven.initialVelocity();
+        }
+        if (upperDriven != null) {
+            state[stride * (n - 1)] = upperDriven.initialVelocity();
+        }
         if (thermal) {
             if (lowerTemperaturePrescribed) {
                 state[1] = ((ThermalCondition.FixedTemperature) lowerThermal).temperature();
@@ -274,12 +295,16 @@ public final class FilmDiscretization implements ImplicitSystem {
     /** Sets the prescribed rows of {@code state} to their values at time {@code t}. */
     public void applyPrescribed(double t, double[] state) {
         if (Double.isNaN(steadyLambda)) {
-            state[0] = lowerMotion.velocity(t);
+            if (lowerVelocityPrescribed) {
+                state[0] = lowerMotion.velocity(t);
+            }
             if (upperVelocityPrescribed) {
                 state[stride * (n - 1)] = upperMotion.velocity(t);
             }
         } else {
-            state[0] = steadyLambda * lowerMotion.settledVelocity().orElseThrow();
+            if (lowerVelocityPrescribed) {
+                state[0] = steadyLambda * lowerMotion.settledVelocity().orElseThrow();
+            }
             if (upperVelocityPrescribed) {
                 state[stride * (n - 1)] = steadyLambda * upperMotion.settledVelocity().orElseThrow();
             }
@@ -326,7 +351,7 @@ public final class FilmDiscretization implements ImplicitSystem {
             if (!(cp[i] > 0) || !(kNode[i] > 0)) {
                 return false;
             }
-            massU[i] = r * volume[i];
+            massU[i] = r * volume[i] + wallMass(i);
             massT[i] = r * cp[i] * volume[i];
         }
         for (int j = 0; j < n - 1; j++) {
@@ -368,6 +393,12 @@ public final class FilmDiscretization implements ImplicitSystem {
             }
             momentumBalance[i] = outer - inner + volume[i] * body;
         }
+        if (lowerDriven != null) {
+            momentumBalance[0] += driveForce(lowerDriven, t, state[0]);
+        }
+        if (upperDriven != null) {
+            momentumBalance[n - 1] += driveForce(upperDriven, t, state[stride * (n - 1)]);
+        }
         if (thermal) {
             for (int i = 0; i < n; i++) {
                 double in = i > 0 ? heatFace[i - 1] : -wallHeatInflow(lowerThermal, state[1]);
@@ -377,6 +408,28 @@ public final class FilmDiscretization implements ImplicitSystem {
                 energyBalance[i] = out - in + dissipation + source;
             }
         }
+    }
+
+    /** The mass per unit area of a driven wall lumped with node {@code i}'s half control volume (kg/m^2). */
+    private double wallMass(int i) {
+        if (i == 0 && lowerDriven != null) {
+            return lowerDriven.massPerArea();
+        }
+        if (i == n - 1 && upperDriven != null) {
+            return upperDriven.massPerArea();
+        }
+        return 0;
+    }
+
+    /** The drive's force per area (Pa); scaled by the continuation parameter and taken at t = infinity when steady. */
+    private double driveForce(WallMotion.Driven wall, double t, double u) {
+        return Double.isNaN(steadyLambda) ? wall.drive().force(t, u)
+                : steadyLambda * wall.drive().force(Double.POSITIVE_INFINITY, u);
+    }
+
+    private double driveForceDerivative(WallMotion.Driven wall, double t, double u) {
+        return Double.isNaN(steadyLambda) ? wall.drive().forceDerivative(t, u)
+                : steadyLambda * wall.drive().forceDerivative(Double.POSITIVE_INFINITY, u);
     }
 
     /** Heat flux from a flux or heat-transfer wall into the fluid (W/m^2) when the wall node is at {@code tWall}. */
@@ -422,7 +475,9 @@ public final class FilmDiscretization implements ImplicitSystem {
     }
 
     private void zeroPrescribed(double[] v) {
-        v[0] = 0;
+        if (lowerVelocityPrescribed) {
+            v[0] = 0;
+        }
         if (upperVelocityPrescribed) {
             v[stride * (n - 1)] = 0;
         }
@@ -442,41 +497,72 @@ public final class FilmDiscretization implements ImplicitSystem {
         return thermal ? solveCoupledStage(t, g, z, state) : solveMomentumStage(t, g, z, state);
     }
 
-    /** Momentum alone: linear, one tridiagonal solve; the factorization is reused while g is unchanged. */
+    /**
+     * Momentum alone: Newton on the tridiagonal Jacobian of R = w M (Y - Z) - g F(Y), w the mass weight. The
+     * equations are linear unless a drive depends on the wall's speed, so one iteration solves them exactly
+     * and the factorization is reused while g is unchanged.
+     */
     private int solveMomentumStage(double t, double g, double[] z, double[] state) {
-        if (g != factoredG || massWeight != factoredMassWeight) {
+        double previous = Double.NaN;
+        for (int iteration = 1; iteration <= NEWTON_MAX_ITERATIONS; iteration++) {
+            boolean refactor = g != factoredG || massWeight != factoredMassWeight || speedDependentDrive;
+            if (refactor) {
+                for (int i = 0; i < n; i++) {
+                    double left = i > 0 ? muFace[i - 1] * inverseSpacing[i - 1] : 0;
+                    double right = i < n - 1 ? muFace[i] * inverseSpacing[i] : 0;
+                    lower[i] = -g * left;
+                    upper[i] = -g * right;
+                    diag[i] = massWeight * massU[i] + g * (left + right);
+                }
+                if (lowerDriven != null) {
+                    diag[0] -= g * driveForceDerivative(lowerDriven, t, state[0]);
+                } else {
+                    diag[0] = 1;
+                    upper[0] = 0;
+                }
+                if (upperDriven != null) {
+                    diag[n - 1] -= g * driveForceDerivative(upperDriven, t, state[n - 1]);
+                } else if (upperVelocityPrescribed) {
+                    diag[n - 1] = 1;
+                    lower[n - 1] = 0;
+                }
+                tridiagonal.factor(lower, diag, upper, n);
+                factoredG = speedDependentDrive ? Double.NaN : g;
+                factoredMassWeight = massWeight;
+            }
+            evaluateBalances(t, state);
             for (int i = 0; i < n; i++) {
-                double left = i > 0 ? muFace[i - 1] * inverseSpacing[i - 1] : 0;
-                double right = i < n - 1 ? muFace[i] * inverseSpacing[i] : 0;
-                lower[i] = -g * left;
-                upper[i] = -g * right;
-                diag[i] = massWeight * massU[i] + g * (left + right);
+                residual[i] = -(massWeight * massU[i] * (state[i] - z[i]) - g * momentumBalance[i]);
             }
-            diag[0] = 1;
-            upper[0] = 0;
+            if (lowerVelocityPrescribed) {
+                residual[0] = 0;
+            }
             if (upperVelocityPrescribed) {
-                diag[n - 1] = 1;
-                lower[n - 1] = 0;
+                residual[n - 1] = 0;
             }
-            tridiagonal.factor(lower, diag, upper, n);
-            factoredG = g;
-            factoredMassWeight = massWeight;
-        }
-        // right-hand side M Z + g (V (-dp/dx + f)); the flux part is in the matrix
-        double pressureForce = -pressureGradient * (Double.isNaN(steadyLambda) ? 1 : steadyLambda);
-        for (int i = 0; i < n; i++) {
-            double body = pressureForce;
-            if (momentumSource != null) {
-                body += momentumSource.value(y[i], t);
+            tridiagonal.solve(residual, delta);
+            double norm = 0;
+            for (int i = 0; i < n; i++) {
+                state[i] += delta[i];
+                double w = delta[i] / (velocityScale + Math.abs(state[i]));
+                norm += w * w;
             }
-            residual[i] = massWeight * massU[i] * z[i] + g * volume[i] * body;
+            if (linear) {
+                return 1;
+            }
+            norm = Math.sqrt(norm / n) / tolerance;
+            if (!(norm < Double.POSITIVE_INFINITY)) {
+                return -iteration;
+            }
+            if (norm <= NEWTON_FRACTION) {
+                return iteration;
+            }
+            if (iteration > 1 && norm / previous >= NEWTON_DIVERGENCE_RATIO) {
+                return -iteration;
+            }
+            previous = norm;
         }
-        residual[0] = state[0];
-        if (upperVelocityPrescribed) {
-            residual[n - 1] = state[n - 1];
-        }
-        tridiagonal.solve(residual, state);
-        return 1;
+        return -NEWTON_MAX_ITERATIONS;
     }
 
     /** Momentum and energy: Newton on the 2x2 block-tridiagonal Jacobian. */
@@ -487,6 +573,7 @@ public final class FilmDiscretization implements ImplicitSystem {
                 return -iteration;
             }
             evaluateBalances(t, state);
+            currentTime = t;
             assembleCoupled(g, z, state);
             blockTridiagonal.factor(blockA, blockB, blockC, n);
             factoredG = Double.NaN;
@@ -585,6 +672,12 @@ public final class FilmDiscretization implements ImplicitSystem {
             } else {
                 ftT += wallHeatInflowDerivative(upperThermal);
             }
+            if (i == 0 && lowerDriven != null) {
+                fuU += driveForceDerivative(lowerDriven, currentTime, u);
+            }
+            if (i == n - 1 && upperDriven != null) {
+                fuU += driveForceDerivative(upperDriven, currentTime, u);
+            }
 
             // J = M + M'(Y - Z) - g dF/dY
             double v = volume[i];
@@ -603,7 +696,9 @@ public final class FilmDiscretization implements ImplicitSystem {
             blockC[k + 3] = -g * ftTp;
         }
         // prescribed rows: identity, zero update (state already holds the prescribed value)
-        prescribeVelocityRow(0);
+        if (lowerVelocityPrescribed) {
+            prescribeVelocityRow(0);
+        }
         if (upperVelocityPrescribed) {
             prescribeVelocityRow(n - 1);
         }
@@ -835,7 +930,7 @@ public final class FilmDiscretization implements ImplicitSystem {
      */
     public void momentumDiffusionOperator(double[] diagonal, double[] offDiagonal) {
         int first = 1;
-        int last = upperVelocityPrescribed ? n - 2 : n - 1;
+        int last = upperMotion != null ? n - 2 : n - 1;
         for (int i = first; i <= last; i++) {
             double left = muFace[i - 1] * inverseSpacing[i - 1];
             double right = i < n - 1 ? muFace[i] * inverseSpacing[i] : 0;
@@ -848,6 +943,6 @@ public final class FilmDiscretization implements ImplicitSystem {
 
     /** Number of nodes whose velocity is not prescribed. */
     public int freeVelocityNodes() {
-        return upperVelocityPrescribed ? n - 2 : n - 1;
+        return upperMotion != null ? n - 2 : n - 1;
     }
 }

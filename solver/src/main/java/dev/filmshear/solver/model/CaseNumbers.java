@@ -33,12 +33,16 @@ import dev.filmshear.solver.physics.WallMotion;
  * @param shearHeatingRise the temperature rise shear heating would cause at constant viscosity: mu U^2 / (8 k)
  *     when both walls take heat away, mu U^2 / (2 k) when only one does (BSL section 10.4) (K); NaN when
  *     isothermal
+ * @param drivenWallTimeScale for a driven wall: its mass per area times the gap over the viscosity (s), the
+ *     time constant of a coast-down on a quasi-steady film of constant viscosity (I c / (mu A R^2) for a
+ *     journal); NaN without a driven wall
  */
 public record CaseNumbers(double referenceTemperature, double density, double viscosity, double kinematicViscosity,
                           double gap, double depth, double relativeSpeed, double reynoldsNumber,
                           double momentumTimeScale, double momentumTimeScaleAnalytic, double thermalTimeScale,
                           double prandtlNumber, double penetrationDepth, double viscosityTemperatureCoefficient,
-                          double nahmeNumber, double brinkmanNumber, double shearHeatingRise) {
+                          double nahmeNumber, double brinkmanNumber, double shearHeatingRise,
+                          double drivenWallTimeScale) {
 
     /**
      * Reynolds number U c / nu (full gap, full wall-speed difference) above which a plane Couette film
@@ -105,8 +109,14 @@ public record CaseNumbers(double referenceTemperature, double density, double vi
             rise = sinks == 2 ? mu * speed * speed / (8 * k) : sinks == 1 ? mu * speed * speed / (2 * k)
                     : Double.POSITIVE_INFINITY;
         }
+        double drivenTime = Double.NaN;
+        for (var wall : new dev.filmshear.solver.physics.Wall[] {physics.lower(), physics.upper()}) {
+            if (wall != null && wall.motion() instanceof WallMotion.Driven d && !physics.isSemiInfinite()) {
+                drivenTime = d.massPerArea() * gap / mu;
+            }
+        }
         return new CaseNumbers(t0, rho, mu, nu, gap, depth, speed, reynolds, tm, tmAnalytic, thermal, prandtl,
-                penetration, beta, nahme, brinkman, rise);
+                penetration, beta, nahme, brinkman, rise, drivenTime);
     }
 
     /** True when the Reynolds number of a film in a gap is above {@link #LAMINAR_REYNOLDS_LIMIT}. */

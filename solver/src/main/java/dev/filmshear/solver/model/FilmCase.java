@@ -2,6 +2,7 @@ package dev.filmshear.solver.model;
 
 import dev.filmshear.solver.base.InvalidParameterException;
 import dev.filmshear.solver.physics.FilmPhysics;
+import dev.filmshear.solver.physics.JournalGeometry;
 
 import java.util.Arrays;
 import java.util.Objects;
@@ -15,8 +16,11 @@ import java.util.Objects;
  * @param grid nodes across the film
  * @param tolerance relative accuracy target of each time step
  * @param outputTimes times (s) of profile snapshots, increasing, within (0, end]; the end is always added
+ * @param journal the journal bearing the film is unwrapped from, or null for a plane film
+ * @param limits limits on the results, beyond which the run warns
  */
-public record FilmCase(FilmPhysics physics, Horizon horizon, GridSpec grid, double tolerance, double[] outputTimes) {
+public record FilmCase(FilmPhysics physics, Horizon horizon, GridSpec grid, double tolerance, double[] outputTimes,
+                       JournalGeometry journal, Limits limits) {
     /** Accuracy target when a case does not say. */
     public static final double DEFAULT_TOLERANCE = 1e-6;
 
@@ -43,6 +47,15 @@ public record FilmCase(FilmPhysics physics, Horizon horizon, GridSpec grid, doub
             throw new InvalidParameterException("times", outputTimes.length + " output times",
                     "no output times for a steady case");
         }
+        if (journal != null && physics.isSemiInfinite()) {
+            throw new InvalidParameterException("journal", "a semi-infinite film", "a journal has a finite gap");
+        }
+        limits = limits == null ? Limits.NONE : limits;
+    }
+
+    /** A plane film without limits. */
+    public FilmCase(FilmPhysics physics, Horizon horizon, GridSpec grid, double tolerance, double[] outputTimes) {
+        this(physics, horizon, grid, tolerance, outputTimes, null, Limits.NONE);
     }
 
     /** A transient case with the default grid and tolerance. */
@@ -72,38 +85,49 @@ public record FilmCase(FilmPhysics physics, Horizon horizon, GridSpec grid, doub
 
     /** A copy with another grid. */
     public FilmCase withGrid(GridSpec newGrid) {
-        return new FilmCase(physics, horizon, newGrid, tolerance, outputTimes);
+        return new FilmCase(physics, horizon, newGrid, tolerance, outputTimes, journal, limits);
     }
 
     /** A copy with another tolerance. */
     public FilmCase withTolerance(double newTolerance) {
-        return new FilmCase(physics, horizon, grid, newTolerance, outputTimes);
+        return new FilmCase(physics, horizon, grid, newTolerance, outputTimes, journal, limits);
     }
 
     /** A copy with other physics. */
     public FilmCase withPhysics(FilmPhysics newPhysics) {
-        return new FilmCase(newPhysics, horizon, grid, tolerance, outputTimes);
+        return new FilmCase(newPhysics, horizon, grid, tolerance, outputTimes, journal, limits);
     }
 
     /** A copy with another horizon and output times. */
     public FilmCase withHorizon(Horizon newHorizon, double... newOutputTimes) {
-        return new FilmCase(physics, newHorizon, grid, tolerance, newOutputTimes);
+        return new FilmCase(physics, newHorizon, grid, tolerance, newOutputTimes, journal, limits);
+    }
+
+    /** A copy for a journal bearing with the given limits. */
+    public FilmCase withJournal(JournalGeometry newJournal, Limits newLimits) {
+        return new FilmCase(physics, horizon, grid, tolerance, outputTimes, newJournal, newLimits);
+    }
+
+    /** True for a film unwrapped from a journal bearing. */
+    public boolean isJournal() {
+        return journal != null;
     }
 
     @Override
     public boolean equals(Object o) {
         return o instanceof FilmCase c && physics.equals(c.physics) && horizon.equals(c.horizon)
-                && grid.equals(c.grid) && tolerance == c.tolerance && Arrays.equals(outputTimes, c.outputTimes);
+                && grid.equals(c.grid) && tolerance == c.tolerance && Arrays.equals(outputTimes, c.outputTimes)
+                && Objects.equals(journal, c.journal) && limits.equals(c.limits);
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(physics, horizon, grid, tolerance, Arrays.hashCode(outputTimes));
+        return Objects.hash(physics, horizon, grid, tolerance, Arrays.hashCode(outputTimes), journal, limits);
     }
 
     @Override
     public String toString() {
         return "FilmCase[" + physics + ", " + horizon + ", " + grid + ", tolerance=" + tolerance
-                + ", outputTimes=" + Arrays.toString(outputTimes) + "]";
+                + ", outputTimes=" + Arrays.toString(outputTimes) + ", journal=" + journal + ", limits=" + limits + "]";
     }
 }

@@ -22,11 +22,21 @@ package dev.filmshear.solver.model;
  * @param steps accepted time steps (continuation steps for a steady solve)
  * @param rejectedSteps rejected step attempts
  * @param newtonIterations Newton iterations over all stages
+ * @param frictionTorque journal only: wall shear stress on the shaft times film area times radius (N m); NaN
+ *     for a plane film
+ * @param frictionPower journal only: friction torque times shaft angular speed (W); NaN for a plane film
+ * @param petroffTorque journal only: Petroff's torque 2 pi mu Omega R^3 L / c at the viscosity of the film's
+ *     mean temperature (N m); NaN for a plane film
+ * @param speedRiseTime driven wall only: the time its speed first reached 99 % of its final speed (s), NaN
+ *     when it did not rise
+ * @param coastDownTime driven wall only: the time its speed first fell to the coast-down fraction of its
+ *     initial speed (s), NaN when it did not
  */
 public record FilmSummary(boolean steady, double endTime, double wallShearStressLower, double wallShearStressUpper,
                           double lowerWallTemperature, double upperWallTemperature, double maxTemperature,
                           double meanTemperature, double dissipation, double heatFluxIntoLowerWall,
                           double heatFluxIntoUpperWall, double dissipatedEnergy, double conductedEnergy,
                           double storedEnergyChange, double energyImbalance, long steps, long rejectedSteps,
-                          long newtonIterations) {
+                          long newtonIterations, double frictionTorque, double frictionPower, double petroffTorque,
+                          double speedRiseTime, double coastDownTime) {
 }

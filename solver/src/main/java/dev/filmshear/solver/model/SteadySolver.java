@@ -5,6 +5,7 @@ import dev.filmshear.solver.discretization.FilmDiscretization;
 import dev.filmshear.solver.physics.FilmPhysics;
 import dev.filmshear.solver.physics.ThermalCondition;
 import dev.filmshear.solver.physics.Wall;
+import dev.filmshear.solver.physics.WallMotion;
 
 /**
  * Solves the steady film equations directly: Newton's method on F(U, T) = 0, with continuation in the
@@ -30,11 +31,18 @@ public final class SteadySolver {
         if (physics.isSemiInfinite()) {
             throw new NumericalFailureException("no steady state: a semi-infinite film keeps spreading; give an end time");
         }
+        int driven = 0;
         for (Wall wall : new Wall[] {physics.lower(), physics.upper()}) {
-            if (wall.motion().settledVelocity().isEmpty()) {
+            if (wall.motion() instanceof WallMotion.Driven) {
+                driven++;
+            } else if (wall.motion().settledVelocity().isEmpty()) {
                 throw new NumericalFailureException(
                         "no steady state: an oscillating wall never settles; give an end time");
             }
+        }
+        if (driven == 2) {
+            throw new NumericalFailureException("no steady state: with both walls driven the film's speed has no "
+                    + "reference; prescribe one wall's velocity or give an end time");
         }
         if (physics.momentumSource() != null || physics.heatSource() != null) {
             throw new NumericalFailureException("no steady state: volume sources depend on time");
@@ -64,7 +72,10 @@ public final class SteadySolver {
         double[] trial = new double[equations.size()];
         equations.initialState(state);
         if (!equations.isThermal()) {
-            equations.solveSteady(1, state);
+            if (equations.solveSteady(1, state) < 0) {
+                throw new NumericalFailureException("no steady solution found: the drive and the film's friction "
+                        + "do not balance at any speed Newton could reach");
+            }
             System.arraycopy(state, 0, stateOut, 0, state.length);
             return 1;
         }

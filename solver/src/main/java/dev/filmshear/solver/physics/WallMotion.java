@@ -13,7 +13,7 @@ import java.util.OptionalDouble;
  * report them, and the time stepper lands on each corner exactly so that no step straddles a kink.
  */
 public sealed interface WallMotion
-        permits WallMotion.Steady, WallMotion.Ramp, WallMotion.Sine, WallMotion.Table {
+        permits WallMotion.Steady, WallMotion.Ramp, WallMotion.Sine, WallMotion.Table, WallMotion.Driven {
 
     /** Wall velocity (m/s) at time {@code t} (s), for t &gt;= 0 (the value just after a jump at t = 0). */
     double velocity(double t);
@@ -30,6 +30,61 @@ public sealed interface WallMotion
     /** True when the wall never moves. */
     default boolean isAtRest() {
         return this instanceof Steady s && s.velocity() == 0;
+    }
+
+    /** True when the velocity is prescribed; false for a driven wall, whose velocity is solved for. */
+    default boolean isPrescribed() {
+        return !(this instanceof Driven);
+    }
+
+    /**
+     * A free wall with inertia, driven by a force and braked by the film's shear stress:
+     * massPerArea dU/dt = drive(t, U) - (shear stress of the film on the wall). Its velocity is an unknown of
+     * the equations, solved with the film inside each implicit step. For a journal bearing the cli turns a
+     * rotor inertia I and torque Q on a shaft of radius R and film area A into massPerArea = I / (R^2 A) and
+     * force = Q / (R A).
+     *
+     * <p>{@link #velocity(double)} gives the initial velocity only; {@link #maxSpeed(double)} is an estimate
+     * for error scaling, supplied when the wall is built.
+     *
+     * @param massPerArea kg/m^2, above zero
+     * @param drive the driving force per unit area
+     * @param initialVelocity m/s at t = 0
+     * @param speedEstimate an estimate of the largest speed reached (m/s), for error scaling
+     * @param coastDownFraction the fraction of the initial speed whose time of passage a coast-down reports
+     */
+    record Driven(double massPerArea, Drive drive, double initialVelocity, double speedEstimate,
+                  double coastDownFraction) implements WallMotion {
+        public Driven {
+            InvalidParameterException.requirePositive("mass", massPerArea, "kg/m^2");
+            java.util.Objects.requireNonNull(drive, "drive");
+            InvalidParameterException.requireFinite("initial", initialVelocity, "m/s");
+            InvalidParameterException.requireNonNegative("speed_estimate", speedEstimate, "m/s");
+            if (!(coastDownFraction > 0 && coastDownFraction < 1)) {
+                throw new InvalidParameterException("coast_down_fraction", Double.toString(coastDownFraction),
+                        "a fraction between 0 and 1");
+            }
+        }
+
+        @Override
+        public double velocity(double t) {
+            return initialVelocity;
+        }
+
+        @Override
+        public double[] corners() {
+            return drive.corners();
+        }
+
+        @Override
+        public OptionalDouble settledVelocity() {
+            return OptionalDouble.empty();
+        }
+
+        @Override
+        public double maxSpeed(double end) {
+            return Math.max(Math.abs(initialVelocity), speedEstimate);
+        }
     }
 
     /**

@@ -38,6 +38,10 @@ public final class AnalyticFamilies {
         if (physics.momentumSource() != null || physics.heatSource() != null || !fluid.density().isConstant()) {
             return Optional.empty();
         }
+        if (!physics.lower().motion().isPrescribed()
+                || (physics.upper() != null && !physics.upper().motion().isPrescribed())) {
+            return Optional.empty(); // a driven wall: its velocity is part of the solution (see CoastDown)
+        }
         if (!fluid.viscosity().isConstant()) {
             return physics.isThermal() ? matchTemperatureDependentViscosity(filmCase) : Optional.empty();
         }
