@@ -31,8 +31,36 @@ class CommandLineTest {
     }
 
     @Test
-    void demoWritesEveryResultFileWithTheContractsNames(@TempDir Path dir) throws IOException {
+    void demoRunsTheHeatedJournalStartUpWithItsJournalKeys(@TempDir Path dir) throws IOException {
         Outcome o = run("demo", "--out", dir.toString());
+        assertEquals(0, o.code(), o.err());
+        JsonNode summary = new ObjectMapper().readTree(dir.resolve("summary.json").toFile());
+        for (String key : List.of("friction_torque_N_m", "friction_power_W", "petroff_torque_N_m")) {
+            assertTrue(summary.get(key).isNumber(), "journal key " + key);
+        }
+        assertTrue(summary.get("max_temperature_K").asDouble() > 313.15, "the film heats up");
+        for (String file : List.of("temperature_profiles.png", "viscosity_profiles.png", "max_temperature.png",
+                "shaft_speed_and_torque.png")) {
+            assertTrue(Files.size(dir.resolve(file)) > 0, file);
+        }
+    }
+
+    @Test
+    void everyBundledExampleIsListedAndReads(@TempDir Path dir) throws IOException {
+        Outcome list = run("demo", "--list");
+        assertEquals(0, list.code(), list.err());
+        for (String example : DemoCommand.EXAMPLES) {
+            assertTrue(list.out().contains(example), example);
+            Outcome saved = run("demo", example, "--save", dir.toString());
+            assertEquals(0, saved.code(), saved.err());
+            assertEquals(0, run("check", dir.resolve(example + ".toml").toString()).code(), example);
+        }
+        assertEquals(2, run("demo", "no-such-example").code());
+    }
+
+    @Test
+    void quillExampleWritesEveryResultFileWithTheContractsNames(@TempDir Path dir) throws IOException {
+        Outcome o = run("demo", "spindle-quill-startup", "--out", dir.toString());
         assertEquals(0, o.code(), o.err());
         for (String file : List.of("summary.json", "history.csv", "profiles.csv", "velocity_profiles.png",
                 "wall_shear_stress.png")) {
@@ -66,7 +94,7 @@ class CommandLineTest {
     @Test
     void runWritesToTheDefaultFolderNamedAfterTheCase(@TempDir Path dir) throws IOException {
         Path caseFile = dir.resolve("quill.toml");
-        Files.writeString(caseFile, DemoCommand.Examples.read(DemoCommand.DEMO_CASE));
+        Files.writeString(caseFile, DemoCommand.Examples.read("spindle-quill-startup"));
         Path out = dir.resolve("results");
         Outcome o = run("run", caseFile.toString(), "--out", out.toString());
         assertEquals(0, o.code(), o.err());
@@ -77,7 +105,7 @@ class CommandLineTest {
     @Test
     void checkPrintsTheResolvedCaseAndItsNumbersWithoutSolving(@TempDir Path dir) throws IOException {
         Path caseFile = dir.resolve("quill.toml");
-        Files.writeString(caseFile, DemoCommand.Examples.read(DemoCommand.DEMO_CASE));
+        Files.writeString(caseFile, DemoCommand.Examples.read("spindle-quill-startup"));
         Outcome o = run("check", caseFile.toString());
         assertEquals(0, o.code(), o.err());
         assertTrue(o.out().contains("gap                 2.0E-5 m"), o.out());

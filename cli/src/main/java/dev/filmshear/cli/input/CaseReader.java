@@ -185,7 +185,7 @@ public final class CaseReader {
             lower = root.table("lower_wall", WALL_KEYS);
             upper = root.table("upper_wall", WALL_KEYS);
             pressure = root.table("pressure", "gradient");
-            initial = root.table("initial", "velocity", "temperature");
+            initial = root.table("initial", "velocity", "temperature", "steady");
             time = root.table("time", "end", "tolerance");
             grid = root.table("grid", "points", "clustering");
             output = root.table("output", "times", "plots");
@@ -248,8 +248,17 @@ public final class CaseReader {
             JournalSpec finalJournal = journalSpec;
             JournalGeometry geometry = finalJournal == null ? null
                     : new JournalGeometry(finalJournal.diameter(), finalJournal.length());
+            boolean steadyStart = initial.bool("steady", false);
+            if (steadyStart && initial.has("velocity")) {
+                throw initial.error("velocity", "initial.velocity and initial.steady = true exclude each other",
+                        initial.written("velocity"), "either a uniform initial velocity or steady = true");
+            }
+            if (steadyStart && horizon instanceof Horizon.Steady) {
+                throw initial.error("steady", "a steady start needs a transient case", initial.written("steady"),
+                        "steady = true only with an end time in [time] end");
+            }
             FilmCase filmCase = build(() -> new FilmCase(physics, horizon, gridSpec, tolerance, outputTimes,
-                            geometry, caseLimits),
+                            geometry, caseLimits, steadyStart),
                     keys(Map.of("tolerance", time.key("tolerance"), "times", output.key("times"),
                             "end", time.key("end")), "time"));
             return new CaseFile(doc.fileName(), title, filmCase, plots, doc, journalSpec);

@@ -45,6 +45,11 @@ public final class Plots {
                 dir.resolve("velocity_profiles.png"));
         if (result.history().size() > 1) {
             save(historyChart(result), dir.resolve("wall_shear_stress.png"));
+            if (result.filmCase().isJournal()) {
+                save(journalChart(result), dir.resolve("shaft_speed_and_torque.png"));
+            } else if (hasDrivenWall(result)) {
+                save(wallVelocityChart(result), dir.resolve("wall_velocity.png"));
+            }
         }
         if (thermal) {
             save(profileChart("Temperature across the film", "temperature (K)", profiles, Field.TEMPERATURE, null),
@@ -199,6 +204,54 @@ public final class Plots {
         addLine(chart, "lower wall", t, h.column(History.Column.WALL_SHEAR_STRESS_LOWER), PALETTE[0]);
         if (!result.filmCase().physics().isSemiInfinite()) {
             addLine(chart, "upper wall", t, h.column(History.Column.WALL_SHEAR_STRESS_UPPER), PALETTE[1]);
+        }
+        return chart;
+    }
+
+    private static boolean hasDrivenWall(FilmResult result) {
+        var physics = result.filmCase().physics();
+        return !physics.lower().motion().isPrescribed()
+                || (physics.upper() != null && !physics.upper().motion().isPrescribed());
+    }
+
+    /** Shaft speed (rpm) and friction torque (N m) over time, on two y axes. */
+    private static XYChart journalChart(FilmResult result) {
+        History h = result.history();
+        double[] seconds = h.column(History.Column.TIME);
+        TimeUnit unit = TimeUnit.forSpan(seconds[seconds.length - 1]);
+        double[] t = unit.scale(seconds);
+        var journal = result.filmCase().journal();
+        double[] surface = h.column(History.Column.UPPER_WALL_VELOCITY);
+        double[] shear = h.column(History.Column.WALL_SHEAR_STRESS_UPPER);
+        double[] rpm = new double[t.length];
+        double[] torque = new double[t.length];
+        for (int i = 0; i < t.length; i++) {
+            rpm[i] = surface[i] / (Math.PI * journal.diameter()) * 60;
+            torque[i] = shear[i] * journal.area() * journal.radius();
+        }
+        XYChart chart = base("Shaft speed and friction torque", "time (" + unit.name() + ")", "speed (rpm)");
+        addLine(chart, "shaft speed (rpm)", t, rpm, PALETTE[0]);
+        XYSeries torqueSeries = chart.addSeries("friction torque (N m)", t, torque);
+        torqueSeries.setMarker(SeriesMarkers.NONE);
+        torqueSeries.setLineColor(PALETTE[1]);
+        torqueSeries.setLineStyle(new BasicStroke(2f));
+        torqueSeries.setYAxisGroup(1);
+        chart.setYAxisGroupTitle(1, "friction torque (N m)");
+        chart.getStyler().setYAxisGroupPosition(1, Styler.YAxisPosition.Right);
+        chart.getStyler().setyAxisTickLabelsFormattingFunction(null);
+        return chart;
+    }
+
+    /** The walls' velocities over time (for a driven wall). */
+    private static XYChart wallVelocityChart(FilmResult result) {
+        History h = result.history();
+        double[] seconds = h.column(History.Column.TIME);
+        TimeUnit unit = TimeUnit.forSpan(seconds[seconds.length - 1]);
+        double[] t = unit.scale(seconds);
+        XYChart chart = base("Wall velocity", "time (" + unit.name() + ")", "velocity (m/s)");
+        addLine(chart, "lower wall", t, h.column(History.Column.LOWER_WALL_VELOCITY), PALETTE[0]);
+        if (result.filmCase().physics().upper() != null) {
+            addLine(chart, "upper wall", t, h.column(History.Column.UPPER_WALL_VELOCITY), PALETTE[1]);
         }
         return chart;
     }

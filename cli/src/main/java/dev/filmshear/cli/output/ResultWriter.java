@@ -88,6 +88,7 @@ public final class ResultWriter {
         number(root, "upper_wall_temperature_K", s.upperWallTemperature());
         number(root, "max_temperature_K", s.maxTemperature());
         number(root, "mean_temperature_K", s.meanTemperature());
+        number(root, "peak_temperature_K", s.peakTemperature());
         number(root, "dissipation_W_per_m2", s.dissipation());
         number(root, "reynolds_number", n.reynoldsNumber());
         ArrayNode warnings = root.putArray("warnings");

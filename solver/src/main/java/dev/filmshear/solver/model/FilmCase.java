@@ -18,9 +18,11 @@ import java.util.Objects;
  * @param outputTimes times (s) of profile snapshots, increasing, within (0, end]; the end is always added
  * @param journal the journal bearing the film is unwrapped from, or null for a plane film
  * @param limits limits on the results, beyond which the run warns
+ * @param startSteady true to start from the steady state with every wall held at its velocity at t = 0 (a
+ *     machine running steadily before the transient), instead of the uniform initial state
  */
 public record FilmCase(FilmPhysics physics, Horizon horizon, GridSpec grid, double tolerance, double[] outputTimes,
-                       JournalGeometry journal, Limits limits) {
+                       JournalGeometry journal, Limits limits, boolean startSteady) {
     /** Accuracy target when a case does not say. */
     public static final double DEFAULT_TOLERANCE = 1e-6;
 
@@ -51,11 +53,14 @@ public record FilmCase(FilmPhysics physics, Horizon horizon, GridSpec grid, doub
             throw new InvalidParameterException("journal", "a semi-infinite film", "a journal has a finite gap");
         }
         limits = limits == null ? Limits.NONE : limits;
+        if (startSteady && horizon instanceof Horizon.Steady) {
+            throw new InvalidParameterException("steady", "a steady start", "a transient case (an end time)");
+        }
     }
 
-    /** A plane film without limits. */
+    /** A plane film without limits, from its uniform initial state. */
     public FilmCase(FilmPhysics physics, Horizon horizon, GridSpec grid, double tolerance, double[] outputTimes) {
-        this(physics, horizon, grid, tolerance, outputTimes, null, Limits.NONE);
+        this(physics, horizon, grid, tolerance, outputTimes, null, Limits.NONE, false);
     }
 
     /** A transient case with the default grid and tolerance. */
@@ -85,27 +90,27 @@ public record FilmCase(FilmPhysics physics, Horizon horizon, GridSpec grid, doub
 
     /** A copy with another grid. */
     public FilmCase withGrid(GridSpec newGrid) {
-        return new FilmCase(physics, horizon, newGrid, tolerance, outputTimes, journal, limits);
+        return new FilmCase(physics, horizon, newGrid, tolerance, outputTimes, journal, limits, startSteady);
     }
 
     /** A copy with another tolerance. */
     public FilmCase withTolerance(double newTolerance) {
-        return new FilmCase(physics, horizon, grid, newTolerance, outputTimes, journal, limits);
+        return new FilmCase(physics, horizon, grid, newTolerance, outputTimes, journal, limits, startSteady);
     }
 
     /** A copy with other physics. */
     public FilmCase withPhysics(FilmPhysics newPhysics) {
-        return new FilmCase(newPhysics, horizon, grid, tolerance, outputTimes, journal, limits);
+        return new FilmCase(newPhysics, horizon, grid, tolerance, outputTimes, journal, limits, startSteady);
     }
 
     /** A copy with another horizon and output times. */
     public FilmCase withHorizon(Horizon newHorizon, double... newOutputTimes) {
-        return new FilmCase(physics, newHorizon, grid, tolerance, newOutputTimes, journal, limits);
+        return new FilmCase(physics, newHorizon, grid, tolerance, newOutputTimes, journal, limits, startSteady);
     }
 
     /** A copy for a journal bearing with the given limits. */
     public FilmCase withJournal(JournalGeometry newJournal, Limits newLimits) {
-        return new FilmCase(physics, horizon, grid, tolerance, outputTimes, newJournal, newLimits);
+        return new FilmCase(physics, horizon, grid, tolerance, outputTimes, newJournal, newLimits, startSteady);
     }
 
     /** True for a film unwrapped from a journal bearing. */
@@ -117,17 +122,18 @@ public record FilmCase(FilmPhysics physics, Horizon horizon, GridSpec grid, doub
     public boolean equals(Object o) {
         return o instanceof FilmCase c && physics.equals(c.physics) && horizon.equals(c.horizon)
                 && grid.equals(c.grid) && tolerance == c.tolerance && Arrays.equals(outputTimes, c.outputTimes)
-                && Objects.equals(journal, c.journal) && limits.equals(c.limits);
+                && Objects.equals(journal, c.journal) && limits.equals(c.limits) && startSteady == c.startSteady;
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(physics, horizon, grid, tolerance, Arrays.hashCode(outputTimes), journal, limits);
+        return Objects.hash(physics, horizon, grid, tolerance, Arrays.hashCode(outputTimes), journal, limits, startSteady);
     }
 
     @Override
     public String toString() {
         return "FilmCase[" + physics + ", " + horizon + ", " + grid + ", tolerance=" + tolerance
-                + ", outputTimes=" + Arrays.toString(outputTimes) + ", journal=" + journal + ", limits=" + limits + "]";
+                + ", outputTimes=" + Arrays.toString(outputTimes) + ", journal=" + journal + ", limits=" + limits
+                + ", startSteady=" + startSteady + "]";
     }
 }

@@ -59,6 +59,9 @@ public final class FilmModel implements FilmState {
         // impulsive start is then a jump at the wall that the error estimate resolves with short first steps
         discretization.initialState(state);
         discretization.applyPrescribed(0, state);
+        if (filmCase.startSteady()) {
+            steadyStart(filmCase, state);
+        }
         if (!discretization.update(0, state)) {
             throw new NumericalFailureException("the initial state is outside the property laws: "
                     + discretization.describeUnusable(state), 0, 0, -1, "temperature");
@@ -70,6 +73,23 @@ public final class FilmModel implements FilmState {
         // a step a million times shorter than the diffusion time of the finest cell resolves nothing more
         integrator.start(0, state, firstStep, 1e-6 * cellTime);
         current = true;
+    }
+
+    /**
+     * Replaces the initial state by the steady state of the same film with every wall held at its velocity at
+     * t = 0 (a driven wall at its initial velocity), solved on the same grid.
+     */
+    private static void steadyStart(FilmCase filmCase, double[] state) {
+        FilmPhysics physics = filmCase.physics();
+        FilmPhysics frozen = physics.withWalls(held(physics.lower()), physics.upper() == null ? null
+                : held(physics.upper()));
+        FilmCase steadyCase = new FilmCase(frozen, new Horizon.Steady(), filmCase.grid(), filmCase.tolerance(), null);
+        FilmModel steadyModel = new FilmModel(steadyCase, SolverOptions.defaults());
+        SteadySolver.solve(steadyModel, state);
+    }
+
+    private static Wall held(Wall wall) {
+        return new Wall(new WallMotion.Steady(wall.motion().velocity(0)), wall.thermal());
     }
 
     /** The grid the case resolves to (for a semi-infinite film, truncated at the chosen depth). */

@@ -68,9 +68,10 @@ public final class FilmSolver {
 
     private static FilmResult solveTransient(FilmModel model, CaseNumbers numbers, SolverOptions options) {
         FilmPhysics physics = model.filmCase().physics();
-        boolean impulsive = Math.abs(physics.lower().motion().velocity(0) - physics.initialVelocity()) > 0
+        boolean impulsive = !model.filmCase().startSteady()
+                && (Math.abs(physics.lower().motion().velocity(0) - physics.initialVelocity()) > 0
                 || (physics.upper() != null
-                && Math.abs(physics.upper().motion().velocity(0) - physics.initialVelocity()) > 0);
+                && Math.abs(physics.upper().motion().velocity(0) - physics.initialVelocity()) > 0));
         HistoryRecorder history = new HistoryRecorder(options.recordSteps(), impulsive);
         RunTracker tracker = new RunTracker(physics);
         List<Snapshot> snapshots = new ArrayList<>();
@@ -183,7 +184,8 @@ public final class FilmSolver {
         return new FilmSummary(steady, time, shearLower, shearUpper, lowerWallT, upperWallT, maxT, meanT,
                 dissipation, fluxLower, fluxUpper, dissipated, conducted, stored, imbalance, steps,
                 model.integrator().rejectedSteps(), model.integrator().newtonIterations(), torque, power, petroff,
-                tracker.speedRiseTime(), Double.isNaN(fraction) ? Double.NaN : tracker.coastDownTime(fraction));
+                tracker.speedRiseTime(), Double.isNaN(fraction) ? Double.NaN : tracker.coastDownTime(fraction),
+                Math.max(tracker.maxTemperature(), Double.isNaN(maxT) ? Double.NEGATIVE_INFINITY : maxT));
     }
 
     private static double drivenFraction(FilmPhysics physics) {

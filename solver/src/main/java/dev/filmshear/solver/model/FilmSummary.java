@@ -31,6 +31,7 @@ package dev.filmshear.solver.model;
  *     when it did not rise
  * @param coastDownTime driven wall only: the time its speed first fell to the coast-down fraction of its
  *     initial speed (s), NaN when it did not
+ * @param peakTemperature the highest film temperature reached at any step of the run (K)
  */
 public record FilmSummary(boolean steady, double endTime, double wallShearStressLower, double wallShearStressUpper,
                           double lowerWallTemperature, double upperWallTemperature, double maxTemperature,
@@ -38,5 +39,5 @@ public record FilmSummary(boolean steady, double endTime, double wallShearStress
                           double heatFluxIntoUpperWall, double dissipatedEnergy, double conductedEnergy,
                           double storedEnergyChange, double energyImbalance, long steps, long rejectedSteps,
                           long newtonIterations, double frictionTorque, double frictionPower, double petroffTorque,
-                          double speedRiseTime, double coastDownTime) {
+                          double speedRiseTime, double coastDownTime, double peakTemperature) {
 }
