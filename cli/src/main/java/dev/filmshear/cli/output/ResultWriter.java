@@ -4,6 +4,8 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import dev.filmshear.cli.report.CaseText;
+import dev.filmshear.cli.report.HtmlReport;
 import dev.filmshear.solver.model.CaseNumbers;
 import dev.filmshear.solver.model.FilmResult;
 import dev.filmshear.solver.model.FilmSummary;
@@ -19,9 +21,9 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 
 /**
- * Writes a run's result folder: summary.json, history.csv, profiles.csv and, when asked, the plots. The file
- * names, keys and column headers are the outside contract (contract.md, "Result folder of run"); columns
- * and keys beyond it are appended, never renamed.
+ * Writes a run's result folder: summary.json, history.csv, profiles.csv, when asked the plots, and last
+ * report.html. The file names, keys and column headers are the outside contract (contract.md, "Result folder
+ * of run"); columns and keys beyond it are appended, never renamed.
  */
 public final class ResultWriter {
     /** The contract's history header, then this tool's extra columns. */
@@ -50,20 +52,32 @@ public final class ResultWriter {
     }
 
     /**
-     * Writes every result file into {@code dir}, creating it.
+     * Writes every result file into {@code dir}, creating it; the report carries no case text.
      *
      * @throws UncheckedIOException when a file cannot be written
      */
     public static void write(Path dir, FilmResult result, RunInfo info) {
+        write(dir, result, info, null);
+    }
+
+    /**
+     * Writes every result file into {@code dir}, creating it, and last report.html, which embeds the plots.
+     *
+     * @param caseText the case in SI units and as written, for the report; null leaves it out
+     * @throws UncheckedIOException when a file cannot be written
+     */
+    public static void write(Path dir, FilmResult result, RunInfo info, CaseText caseText) {
         try {
             Files.createDirectories(dir);
-            Files.writeString(dir.resolve("summary.json"), JSON.writeValueAsString(summary(result, info)) + "\n",
+            ObjectNode summary = summary(result, info);
+            Files.writeString(dir.resolve("summary.json"), JSON.writeValueAsString(summary) + "\n",
                     StandardCharsets.UTF_8);
             writeHistory(dir.resolve("history.csv"), result.history());
             writeProfiles(dir.resolve("profiles.csv"), result);
             if (info.plots()) {
                 Plots.write(dir, result, info.analytic());
             }
+            HtmlReport.write(dir, summary, caseText);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write results to " + dir + ": " + e.getMessage(), e);
         }
