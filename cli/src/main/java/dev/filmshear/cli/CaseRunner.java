@@ -4,6 +4,7 @@ import dev.filmshear.cli.input.CaseFile;
 import dev.filmshear.cli.output.AnalyticComparison;
 import dev.filmshear.cli.output.Caution;
 import dev.filmshear.cli.output.ResultWriter;
+import dev.filmshear.cli.report.CaseText;
 import dev.filmshear.solver.base.NumericalFailureException;
 import dev.filmshear.solver.model.FilmResult;
 import dev.filmshear.solver.model.FilmSolver;
@@ -24,19 +25,27 @@ final class CaseRunner {
 
     static int run(CaseFile caseFile, Path out, PrintWriter console) {
         FilmResult result;
+        CaseText caseText = caseText(caseFile);
         try {
             result = FilmSolver.solve(caseFile.filmCase());
         } catch (SimulationFailure failure) {
             FilmResult partial = failure.partialResult();
-            ResultWriter.write(out, partial, info(caseFile, partial, failure.getMessage()));
+            ResultWriter.write(out, partial, info(caseFile, partial, failure.getMessage()), caseText);
             throw new CommandFailure(ExitCode.FAILED, failureLine(caseFile, failure.getMessage()
                     + "; partial results kept in " + out), failure);
         } catch (NumericalFailureException failure) {
             throw new CommandFailure(ExitCode.FAILED, failureLine(caseFile, failure.getMessage()), failure);
         }
-        ResultWriter.write(out, result, info(caseFile, result, null));
+        ResultWriter.write(out, result, info(caseFile, result, null), caseText);
         report(console, caseFile, result, out);
         return ExitCode.DONE.code();
+    }
+
+    /** The case as {@code check} resolves it and as written, for the report. */
+    static CaseText caseText(CaseFile caseFile) {
+        java.io.StringWriter resolved = new java.io.StringWriter();
+        CheckCommand.describe(caseFile, new PrintWriter(resolved));
+        return new CaseText(resolved.toString(), caseFile.document().text());
     }
 
     private static ResultWriter.RunInfo info(CaseFile caseFile, FilmResult result, String failure) {

@@ -54,11 +54,16 @@ final class CheckCommand implements Callable<Integer> {
         }
         ViscosityLaw law = p.fluid().viscosity();
         out.printf("  viscosity law       %s%n", law.describe());
-        out.printf("  density             %s kg/m^3 at %s K, expansion %s 1/K%n", p.fluid().density().reference(),
-                p.fluid().density().referenceTemperature(), p.fluid().density().expansion());
+        var density = p.fluid().density();
+        if (density.isConstant()) {
+            out.printf("  density             %s kg/m^3%n", density.reference());
+        } else {
+            out.printf("  density             %s kg/m^3 at %s K, expansion %s 1/K%n", density.reference(),
+                    density.referenceTemperature(), density.expansion());
+        }
         if (p.isThermal()) {
-            out.printf("  specific heat       %s J/(kg*K)%n", p.fluid().specificHeat());
-            out.printf("  conductivity        %s W/(m*K)%n", p.fluid().conductivity());
+            out.printf("  specific heat       %s%n", property(p.fluid().specificHeat(), "J/(kg*K)"));
+            out.printf("  conductivity        %s%n", property(p.fluid().conductivity(), "W/(m*K)"));
         } else {
             out.printf("  energy equation     not solved (isothermal film)%n");
         }
@@ -142,6 +147,14 @@ final class CheckCommand implements Callable<Integer> {
         if (!anyWarning) {
             out.printf("no warnings before solving%n");
         }
+    }
+
+    private static String property(dev.filmshear.solver.physics.PropertyLaw law, String unit) {
+        if (law.isConstant()) {
+            return law.reference() + " " + unit;
+        }
+        return law.reference() + " " + unit + " at " + law.referenceTemperature() + " K, changing by "
+                + law.slope() + " per K";
     }
 
     private static void wall(PrintWriter out, String name, Wall wall) {

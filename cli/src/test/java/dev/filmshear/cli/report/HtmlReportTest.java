@@ -82,7 +82,7 @@ class HtmlReportTest {
     @BeforeAll
     static void runTheDemoAndAHeatedCase() throws IOException {
         demo = work.resolve("demo");
-        assertEquals(0, run("demo", "--out", demo.toString()));
+        assertEquals(0, run("demo", "spindle-quill-startup", "--out", demo.toString()));
         heatedCase = work.resolve("heated.toml");
         Files.writeString(heatedCase, HEATED_CASE);
         heated = work.resolve("heated");

@@ -23,8 +23,8 @@ import dev.filmshear.solver.physics.WallMotion;
  * @param momentumTimeScaleAnalytic gap^2 / (pi^2 nu) (s), the continuous value for constant viscosity
  * @param thermalTimeScale gap^2 / alpha (s); NaN for an isothermal film
  * @param prandtlNumber nu / alpha; NaN for an isothermal film
- * @param penetrationDepth sqrt(nu t_end) for a transient case, the Stokes-layer depth sqrt(2 nu / omega)
- *     for an oscillating wall if larger (m); NaN for a steady case
+ * @param penetrationDepth semi-infinite film only: sqrt(nu t_end), or the Stokes-layer depth sqrt(2 nu / omega)
+ *     of an oscillating wall if larger (m); NaN for a film in a gap and for a steady case
  * @param viscosityTemperatureCoefficient beta = -(d mu / dT) / mu at the reference temperature (1/K)
  * @param nahmeNumber Na = beta mu U^2 / k, how strongly shear heating thins the oil (R. Nahme, Ing.-Arch. 11
  *     (1940) 191, from memory; definition as in the project's reference sheet, section 7(g)); NaN when isothermal
@@ -72,9 +72,10 @@ public record CaseNumbers(double referenceTemperature, double density, double vi
         if (physics.upper() != null && physics.lower().motion().isAtRest()) {
             speed = physics.upper().motion().maxSpeed(horizon);
         }
-        double penetration = Double.isFinite(end) ? Math.sqrt(nu * end) : Double.NaN;
+        // how far momentum diffuses: meaningful for a semi-infinite film only (a gap is crossed in microseconds)
+        double penetration = Double.isFinite(end) && physics.isSemiInfinite() ? Math.sqrt(nu * end) : Double.NaN;
         for (var wall : new dev.filmshear.solver.physics.Wall[] {physics.lower(), physics.upper()}) {
-            if (wall != null && wall.motion() instanceof WallMotion.Sine s) {
+            if (wall != null && physics.isSemiInfinite() && wall.motion() instanceof WallMotion.Sine s) {
                 double stokes = Math.sqrt(2 * nu / s.angularFrequency());
                 penetration = Double.isNaN(penetration) ? stokes : Math.max(penetration, stokes);
             }
