@@ -1,6 +1,7 @@
 package dev.filmshear.validation.analytic;
 
 import dev.filmshear.solver.model.FilmCase;
+import dev.filmshear.solver.physics.ExponentialViscosity;
 import dev.filmshear.solver.physics.FilmPhysics;
 import dev.filmshear.solver.physics.Fluid;
 import dev.filmshear.solver.physics.ThermalCondition;
@@ -13,8 +14,8 @@ import java.util.OptionalDouble;
 /**
  * Recognises, from a case's immutable records, when a case has an exact solution in this package.
  *
- * <p>Common conditions: no volume sources, constant density, a viscosity law that does not depend on
- * temperature. Then:
+ * <p>Common conditions: no volume sources, constant density. With a viscosity law that does not depend on
+ * temperature:
  * <ul>
  *   <li>isothermal, finite gap: {@link ConstantPropertyFilm} for a transient case, its steady limit
  *       {@link CouettePoiseuilleFlow} for a steady one (an oscillating wall has no steady state: no match);</li>
@@ -24,6 +25,9 @@ import java.util.OptionalDouble;
  *       rest and the other moving, walls at fixed temperatures or one fixed and one adiabatic:
  *       {@link CouetteViscousHeating}.</li>
  * </ul>
+ * A heated film whose viscosity follows the exponential law ({@link ExponentialViscosity}) under the same
+ * conditions, with both walls at one temperature or one of them adiabatic, is the Nahme problem
+ * {@link NahmeCouette}.
  * Everything else has no closed form here and gives an empty result.
  */
 public final class AnalyticFamilies {
@@ -105,18 +109,59 @@ public final class AnalyticFamilies {
     }
 
     /**
-     * EXTENSION POINT: heated films whose viscosity depends on temperature.
-     *
-     * <p>The solver has no exponential viscosity law yet, so nothing is matched here. When it gains one,
-     * mu = mu_r exp(-beta (T - T_r)), a case belongs to {@link NahmeCouette} when it is steady, in a finite gap,
-     * without pressure gradient or volume sources, with constant density, specific heat and conductivity, one
-     * wall at rest and the other moving (settled velocities), and either both walls at one fixed temperature T_w
-     * ({@link NahmeCouette.Walls#BOTH_AT_WALL_TEMPERATURE}) or one wall at T_w and the other adiabatic
-     * ({@link NahmeCouette.Walls#LOWER_ADIABATIC} / {@link NahmeCouette.Walls#UPPER_ADIABATIC}). The solution
-     * is then {@code new NahmeCouette(gap, u_a, u_b, mu_r exp(-beta (T_w - T_r)), beta, k, T_w, walls)}: the
-     * law's reference moved to the wall temperature.
+     * Heated films whose viscosity depends on temperature: the exponential law mu = mu_r exp(-beta (T - T_r))
+     * ({@link ExponentialViscosity}) has the closed form {@link NahmeCouette} when the case is steady, in a finite
+     * gap, without pressure gradient (volume sources and a varying density were excluded by the caller), with
+     * constant specific heat and conductivity, one wall at rest and the other moving (settled velocities), and
+     * either both walls at one fixed temperature T_w ({@link NahmeCouette.Walls#BOTH_AT_WALL_TEMPERATURE}) or one
+     * wall at T_w and the other adiabatic ({@link NahmeCouette.Walls#LOWER_ADIABATIC} /
+     * {@link NahmeCouette.Walls#UPPER_ADIABATIC}). The solution is
+     * {@code new NahmeCouette(gap, u_a, u_b, mu_r exp(-beta (T_w - T_r)), beta, k, T_w, walls)}: the law's
+     * reference moved to the wall temperature, where the Nahme problem's mu0 is taken (references.md 7(g)).
+     * Other laws (Vogel, Walther, tables) have no closed form here.
      */
     private static Optional<AnalyticSolution> matchTemperatureDependentViscosity(FilmCase filmCase) {
-        return Optional.empty();
+        FilmPhysics physics = filmCase.physics();
+        Fluid fluid = physics.fluid();
+        if (!(fluid.viscosity() instanceof ExponentialViscosity law) || !filmCase.isSteady()
+                || physics.isSemiInfinite() || physics.pressureGradient() != 0
+                || !fluid.specificHeat().isConstant() || !fluid.conductivity().isConstant()) {
+            return Optional.empty();
+        }
+        OptionalDouble lowerVelocity = physics.lower().motion().settledVelocity();
+        OptionalDouble upperVelocity = physics.upper().motion().settledVelocity();
+        if (lowerVelocity.isEmpty() || upperVelocity.isEmpty()
+                || (lowerVelocity.getAsDouble() == 0) == (upperVelocity.getAsDouble() == 0)) {
+            return Optional.empty();
+        }
+        ThermalCondition lower = physics.lower().thermal();
+        ThermalCondition upper = physics.upper().thermal();
+        NahmeCouette.Walls walls;
+        double wallTemperature;
+        if (lower instanceof ThermalCondition.FixedTemperature a
+                && upper instanceof ThermalCondition.FixedTemperature b) {
+            if (a.temperature() != b.temperature()) {
+                return Optional.empty();
+            }
+            walls = NahmeCouette.Walls.BOTH_AT_WALL_TEMPERATURE;
+            wallTemperature = a.temperature();
+        } else if (isAdiabatic(lower) && upper instanceof ThermalCondition.FixedTemperature b) {
+            walls = NahmeCouette.Walls.LOWER_ADIABATIC;
+            wallTemperature = b.temperature();
+        } else if (lower instanceof ThermalCondition.FixedTemperature a && isAdiabatic(upper)) {
+            walls = NahmeCouette.Walls.UPPER_ADIABATIC;
+            wallTemperature = a.temperature();
+        } else {
+            return Optional.empty();
+        }
+        double conductivity = fluid.conductivity().value(wallTemperature);
+        double wallViscosity = law.reference() * Math.exp(-law.coefficient() * (wallTemperature
+                - law.referenceTemperature()));
+        return Optional.of(new NahmeCouette(physics.gap(), lowerVelocity.getAsDouble(), upperVelocity.getAsDouble(),
+                wallViscosity, law.coefficient(), conductivity, wallTemperature, walls));
+    }
+
+    private static boolean isAdiabatic(ThermalCondition condition) {
+        return condition instanceof ThermalCondition.HeatFlux flux && flux.flux() == 0;
     }
 }
