@@ -24,7 +24,7 @@ import java.util.concurrent.Callable;
  * {@code check CASE.toml}: reads and validates a case and prints it resolved to SI units with its derived
  * numbers; solves nothing.
  */
-@Command(name = "check", description = "Read and validate a case; print it in SI units with its time scales, "
+@Command(mixinStandardHelpOptions = true, name = "check", description = "Read and validate a case; print it in SI units with its time scales, "
         + "Reynolds number and the warnings known before solving. Solves nothing.")
 final class CheckCommand implements Callable<Integer> {
 

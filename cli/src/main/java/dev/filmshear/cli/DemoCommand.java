@@ -22,7 +22,7 @@ import java.util.concurrent.Callable;
  * {@code demo [NAME] [--out DIR]}: runs an example case bundled in the jar (by default the journal bearing
  * start-up); {@code demo --list} names them; {@code demo NAME --save DIR} copies a case file out to edit.
  */
-@Command(name = "demo", description = "Run a bundled example case (default: the journal bearing start-up) and "
+@Command(mixinStandardHelpOptions = true, name = "demo", description = "Run a bundled example case (default: the journal bearing start-up) and "
         + "write its results to ./filmshear-demo/.")
 final class DemoCommand implements Callable<Integer> {
     /** The bundled example the README's main command runs. */

@@ -14,7 +14,7 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 
 /** {@code fluids}: lists the built-in fluids and the viscosity laws with their keys and validity ranges. */
-@Command(name = "fluids", description = "List the built-in fluids and the viscosity laws, with their parameters "
+@Command(mixinStandardHelpOptions = true, name = "fluids", description = "List the built-in fluids and the viscosity laws, with their parameters "
         + "and validity ranges.")
 final class FluidsCommand implements Callable<Integer> {
 

@@ -12,7 +12,7 @@ import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
 /** {@code run CASE.toml [--out DIR]}: solves one case and writes its result folder. */
-@Command(name = "run", description = "Solve one case and write its results (summary.json, history.csv, "
+@Command(mixinStandardHelpOptions = true, name = "run", description = "Solve one case and write its results (summary.json, history.csv, "
         + "profiles.csv, plots).")
 final class RunCommand implements Callable<Integer> {
 

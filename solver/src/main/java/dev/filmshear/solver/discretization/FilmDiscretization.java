@@ -57,6 +57,12 @@ public final class FilmDiscretization implements ImplicitSystem {
     private static final int NEWTON_MAX_ITERATIONS = 10;
     /** Newton is diverging when successive updates shrink by less than this ratio. */
     private static final double NEWTON_DIVERGENCE_RATIO = 0.9;
+    /**
+     * Relative update (against the velocity and temperature scales) below which Newton has converged whatever
+     * the tolerance: round-off in a tridiagonal solve of condition number ~ n^2 leaves updates of this order,
+     * so asking for less would stall a tight-tolerance run.
+     */
+    private static final double NEWTON_ROUNDOFF_FLOOR = 1e-11;
 
     private final FilmGrid grid;
     private final FilmPhysics physics;
@@ -554,7 +560,7 @@ public final class FilmDiscretization implements ImplicitSystem {
             if (!(norm < Double.POSITIVE_INFINITY)) {
                 return -iteration;
             }
-            if (norm <= NEWTON_FRACTION) {
+            if (norm <= Math.max(NEWTON_FRACTION, NEWTON_ROUNDOFF_FLOOR / tolerance)) {
                 return iteration;
             }
             if (iteration > 1 && norm / previous >= NEWTON_DIVERGENCE_RATIO) {
@@ -592,7 +598,7 @@ public final class FilmDiscretization implements ImplicitSystem {
             if (!(norm < Double.POSITIVE_INFINITY)) {
                 return -iteration;
             }
-            if (norm <= NEWTON_FRACTION) {
+            if (norm <= Math.max(NEWTON_FRACTION, NEWTON_ROUNDOFF_FLOOR / tolerance)) {
                 return iteration;
             }
             if (iteration > 1) {
