@@ -77,6 +77,18 @@ final class CaseRunner {
                     Format.number(s.maxTemperature()), Format.number(s.meanTemperature()),
                     Format.number(s.dissipation()));
         }
+        if (result.filmCase().isJournal()) {
+            console.printf("  friction torque %s N*m (Petroff at the mean film viscosity %s N*m), power %s W%n",
+                    Format.number(s.frictionTorque()), Format.number(s.petroffTorque()),
+                    Format.number(s.frictionPower()));
+        }
+        if (!Double.isNaN(s.speedRiseTime())) {
+            console.printf("  driven wall reached 99 %% of its final speed at t = %s%n", Format.time(s.speedRiseTime()));
+        }
+        if (!Double.isNaN(s.coastDownTime())) {
+            console.printf("  driven wall coasted down to its reporting fraction of the initial speed at t = %s%n",
+                    Format.time(s.coastDownTime()));
+        }
         console.printf("  Reynolds number %s%n", Format.number(result.numbers().reynoldsNumber()));
         for (Warning w : result.warnings()) {
             console.printf("  warning: %s%n", w.message());
