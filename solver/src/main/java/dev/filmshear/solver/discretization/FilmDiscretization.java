@@ -55,6 +55,14 @@ public final class FilmDiscretization implements ImplicitSystem {
     private static final double NEWTON_FRACTION = 0.01;
     /** Newton gives up after this many iterations in one stage. */
     private static final int NEWTON_MAX_ITERATIONS = 10;
+    /** Contraction rate assumed before any has been measured. */
+    private static final double NEWTON_INITIAL_THETA = 0.1;
+    /**
+     * A reused (simplified-Newton) Jacobian is refreshed when its iterations contract more slowly than this:
+     * the price of a new factorization is then lower than that of the extra iterations (E. Hairer and
+     * G. Wanner, <i>Solving ODEs II</i>, section IV.8, for the same policy in RADAU5).
+     */
+    private static final double NEWTON_SLOW_THETA = 0.2;
     /** Newton is diverging when successive updates shrink by less than this ratio. */
     private static final double NEWTON_DIVERGENCE_RATIO = 0.9;
     /**
@@ -135,6 +143,19 @@ public final class FilmDiscretization implements ImplicitSystem {
     /** 1 for time stepping; 0 for the steady equations, which drop the storage term. */
     private double massWeight = 1;
     private double factoredMassWeight = Double.NaN;
+    /** g and mass weight of the block factorization held for reuse (simplified Newton); NaN when none. */
+    private double blockFactoredG = Double.NaN;
+    private double blockFactoredMassWeight = Double.NaN;
+    /** Contraction rate of the last Newton iterations, for judging convergence after a single iteration. */
+    private double lastTheta = NEWTON_INITIAL_THETA;
+    /** The stage's starting guess, kept to restart with a fresh Jacobian when a reused one fails. */
+    private final double[] guess;
+    private final boolean constantDensity;
+    private final boolean constantSpecificHeat;
+    private final boolean constantConductivity;
+    /** True once the constant nodal masses (and, below, conductivities) have been computed. */
+    private boolean massesFixed;
+    private boolean conductivityFixed;
     /** The time of the stage being assembled (for time-dependent drives). */
     private double currentTime;
     /** Steady continuation parameter: scales wall speeds and the pressure gradient; NaN when time stepping. */
@@ -208,6 +229,10 @@ public final class FilmDiscretization implements ImplicitSystem {
         massU = new double[n];
         massT = new double[n];
         residual = new double[n * stride];
+        guess = new double[n * stride];
+        constantDensity = densityLaw.isConstant();
+        constantSpecificHeat = specificHeatLaw == null || specificHeatLaw.isConstant();
+        constantConductivity = conductivityLaw == null || conductivityLaw.isConstant();
         delta = new double[n * stride];
         lower = new double[n];
         diag = new double[n];
@@ -333,6 +358,7 @@ public final class FilmDiscretization implements ImplicitSystem {
             return true;
         }
         boolean constantMu = viscosityLaw.isConstant();
+        boolean fixedMasses = constantDensity && constantSpecificHeat && massesFixed;
         for (int i = 0; i < n; i++) {
             double t = state[2 * i + 1];
             if (!(t > 0) || t == Double.POSITIVE_INFINITY) {
@@ -344,6 +370,9 @@ public final class FilmDiscretization implements ImplicitSystem {
             }
             mu[i] = m;
             dMu[i] = constantMu ? 0 : viscosityLaw.dMuDT(t, m);
+            if (fixedMasses) {
+                continue;
+            }
             double r = densityLaw.density(t);
             if (!(r > 0)) {
                 return false;
@@ -352,13 +381,14 @@ public final class FilmDiscretization implements ImplicitSystem {
             dRho[i] = densityLaw.derivative(t);
             cp[i] = specificHeatLaw.value(t);
             dCp[i] = specificHeatLaw.derivative(t);
-            kNode[i] = conductivityLaw.value(t);
-            dK[i] = conductivityLaw.derivative(t);
-            if (!(cp[i] > 0) || !(kNode[i] > 0)) {
+            if (!(cp[i] > 0)) {
                 return false;
             }
             massU[i] = r * volume[i] + wallMass(i);
             massT[i] = r * cp[i] * volume[i];
+        }
+        if (constantDensity && constantSpecificHeat) {
+            massesFixed = true;
         }
         for (int j = 0; j < n - 1; j++) {
             // harmonic mean and its derivatives with respect to the two nodal temperatures
@@ -368,6 +398,19 @@ public final class FilmDiscretization implements ImplicitSystem {
             muFace[j] = 2 * a * b * s;
             dMuFaceLeft[j] = 2 * b * b * s * s * dMu[j];
             dMuFaceRight[j] = 2 * a * a * s * s * dMu[j + 1];
+        }
+        if (constantConductivity && conductivityFixed) {
+            return true;
+        }
+        for (int i = 0; i < n; i++) {
+            double t = state[2 * i + 1];
+            kNode[i] = conductivityLaw.value(t);
+            dK[i] = conductivityLaw.derivative(t);
+            if (!(kNode[i] > 0)) {
+                return false;
+            }
+        }
+        for (int j = 0; j < n - 1; j++) {
             double ka = kNode[j];
             double kb = kNode[j + 1];
             double ks = 1 / (ka + kb);
@@ -375,6 +418,7 @@ public final class FilmDiscretization implements ImplicitSystem {
             dKFaceLeft[j] = 2 * kb * kb * ks * ks * dK[j];
             dKFaceRight[j] = 2 * ka * ka * ks * ks * dK[j + 1];
         }
+        conductivityFixed = constantConductivity;
         return true;
     }
 
@@ -571,48 +615,109 @@ public final class FilmDiscretization implements ImplicitSystem {
         return -NEWTON_MAX_ITERATIONS;
     }
 
-    /** Momentum and energy: Newton on the 2x2 block-tridiagonal Jacobian. */
+    /**
+     * Momentum and energy: Newton on the 2x2 block-tridiagonal Jacobian, simplified where it pays: the
+     * factorization of M - g J is kept while g is unchanged (both stages of TR-BDF2 share g, and the integrator
+     * keeps h when it would change it only a little), so a stage usually costs one residual evaluation and one
+     * back-substitution. A reused Jacobian that contracts slowly, or fails, is refreshed and the stage redone.
+     * Convergence after the first iteration is judged with the last measured contraction rate theta:
+     * converged when theta / (1 - theta) |delta| is below a fraction of the tolerance (E. Hairer and G. Wanner,
+     * <i>Solving ODEs II</i>, 2nd ed., section IV.8, eq. (8.15) and the RADAU5 code).
+     */
     private int solveCoupledStage(double t, double g, double[] z, double[] state) {
+        boolean reuse = g == blockFactoredG && massWeight == blockFactoredMassWeight;
+        System.arraycopy(state, 0, guess, 0, state.length);
         double previous = Double.NaN;
+        int total = 0;
         for (int iteration = 1; iteration <= NEWTON_MAX_ITERATIONS; iteration++) {
-            if (!evaluateProperties(state)) {
-                return -iteration;
+            total++;
+            boolean usable = evaluateProperties(state);
+            if (usable) {
+                evaluateBalances(t, state);
+                currentTime = t;
+                if (reuse) {
+                    residualCoupled(g, z, state);
+                } else {
+                    assembleCoupled(g, z, state);
+                    blockTridiagonal.factor(blockA, blockB, blockC, n);
+                    blockFactoredG = g;
+                    blockFactoredMassWeight = massWeight;
+                    factoredG = Double.NaN;
+                }
+                blockTridiagonal.solve(residual, delta);
             }
-            evaluateBalances(t, state);
-            currentTime = t;
-            assembleCoupled(g, z, state);
-            blockTridiagonal.factor(blockA, blockB, blockC, n);
-            factoredG = Double.NaN;
-            blockTridiagonal.solve(residual, delta);
             double norm = 0;
-            for (int i = 0; i < n; i++) {
-                double du = delta[2 * i];
-                double dt = delta[2 * i + 1];
-                state[2 * i] += du;
-                state[2 * i + 1] += dt;
-                double wu = du / (velocityScale + Math.abs(state[2 * i]));
-                double wt = dt / temperatureScale;
-                norm += wu * wu + wt * wt;
+            if (usable) {
+                for (int i = 0; i < n; i++) {
+                    double du = delta[2 * i];
+                    double dt = delta[2 * i + 1];
+                    state[2 * i] += du;
+                    state[2 * i + 1] += dt;
+                    double wu = du / (velocityScale + Math.abs(state[2 * i]));
+                    double wt = dt / temperatureScale;
+                    norm += wu * wu + wt * wt;
+                }
+                norm = Math.sqrt(norm / (2 * n)) / tolerance;
             }
-            norm = Math.sqrt(norm / (2 * n)) / tolerance;
-            if (!(norm < Double.POSITIVE_INFINITY)) {
-                return -iteration;
+            double theta = iteration > 1 ? norm / previous : Double.NaN;
+            boolean failing = !usable || !(norm < Double.POSITIVE_INFINITY)
+                    || (iteration > 1 && theta >= NEWTON_DIVERGENCE_RATIO);
+            if (failing) {
+                if (reuse) {
+                    // a stale Jacobian: refresh it and start the stage again from its guess
+                    reuse = false;
+                    System.arraycopy(guess, 0, state, 0, state.length);
+                    iteration = 0;
+                    previous = Double.NaN;
+                    continue;
+                }
+                blockFactoredG = Double.NaN;
+                return -total;
             }
             if (norm <= Math.max(NEWTON_FRACTION, NEWTON_ROUNDOFF_FLOOR / tolerance)) {
-                return iteration;
+                lastTheta = Math.max(lastTheta * 0.8, 1e-4);
+                return total;
             }
-            if (iteration > 1) {
-                double theta = norm / previous;
-                if (theta >= NEWTON_DIVERGENCE_RATIO) {
-                    return -iteration;
+            if (iteration == 1) {
+                double estimate = lastTheta / (1 - lastTheta);
+                if (estimate * norm <= NEWTON_FRACTION) {
+                    return total;
+                }
+            } else {
+                lastTheta = theta;
+                if (reuse && theta > NEWTON_SLOW_THETA) {
+                    blockFactoredG = Double.NaN; // refresh at the next stage
                 }
                 if (theta / (1 - theta) * norm <= NEWTON_FRACTION) {
-                    return iteration;
+                    return total;
                 }
             }
             previous = norm;
         }
-        return -NEWTON_MAX_ITERATIONS;
+        blockFactoredG = Double.NaN;
+        return -total;
+    }
+
+    /** The negated residual -R of the stage equation only (the Jacobian is reused). */
+    private void residualCoupled(double g, double[] z, double[] state) {
+        double mw = massWeight;
+        for (int i = 0; i < n; i++) {
+            int iu = 2 * i;
+            residual[iu] = -(mw * massU[i] * (state[iu] - z[iu]) - g * momentumBalance[i]);
+            residual[iu + 1] = -(mw * massT[i] * (state[iu + 1] - z[iu + 1]) - g * energyBalance[i]);
+        }
+        if (lowerVelocityPrescribed) {
+            residual[0] = 0;
+        }
+        if (upperVelocityPrescribed) {
+            residual[2 * (n - 1)] = 0;
+        }
+        if (lowerTemperaturePrescribed) {
+            residual[1] = 0;
+        }
+        if (upperTemperaturePrescribed) {
+            residual[2 * (n - 1) + 1] = 0;
+        }
     }
 
     /**
@@ -750,6 +855,7 @@ public final class FilmDiscretization implements ImplicitSystem {
     public int solveSteady(double lambda, double[] state) {
         steadyLambda = lambda;
         massWeight = 0;
+        blockFactoredG = Double.NaN;
         try {
             applyPrescribed(0, state);
             if (!thermal) {
@@ -759,6 +865,7 @@ public final class FilmDiscretization implements ImplicitSystem {
         } finally {
             steadyLambda = Double.NaN;
             massWeight = 1;
+            blockFactoredG = Double.NaN;
         }
     }
 
