@@ -354,6 +354,14 @@ public final class FilmDiscretization implements ImplicitSystem {
 
     /** Nodal and face properties at the temperatures of {@code state}; false when a property is not usable. */
     private boolean evaluateProperties(double[] state) {
+        return evaluateProperties(state, true);
+    }
+
+    /**
+     * Nodal and face properties at the temperatures of {@code state}; the derivatives with respect to
+     * temperature only when {@code derivatives} (they feed the Jacobian, not the residual).
+     */
+    private boolean evaluateProperties(double[] state, boolean derivatives) {
         if (!thermal) {
             return true;
         }
@@ -369,7 +377,9 @@ public final class FilmDiscretization implements ImplicitSystem {
                 return false;
             }
             mu[i] = m;
-            dMu[i] = constantMu ? 0 : viscosityLaw.dMuDT(t, m);
+            if (derivatives) {
+                dMu[i] = constantMu ? 0 : viscosityLaw.dMuDT(t, m);
+            }
             if (fixedMasses) {
                 continue;
             }
@@ -390,14 +400,22 @@ public final class FilmDiscretization implements ImplicitSystem {
         if (constantDensity && constantSpecificHeat) {
             massesFixed = true;
         }
-        for (int j = 0; j < n - 1; j++) {
-            // harmonic mean and its derivatives with respect to the two nodal temperatures
-            double a = mu[j];
-            double b = mu[j + 1];
-            double s = 1 / (a + b);
-            muFace[j] = 2 * a * b * s;
-            dMuFaceLeft[j] = 2 * b * b * s * s * dMu[j];
-            dMuFaceRight[j] = 2 * a * a * s * s * dMu[j + 1];
+        if (derivatives) {
+            for (int j = 0; j < n - 1; j++) {
+                // harmonic mean and its derivatives with respect to the two nodal temperatures
+                double a = mu[j];
+                double b = mu[j + 1];
+                double s = 1 / (a + b);
+                muFace[j] = 2 * a * b * s;
+                dMuFaceLeft[j] = 2 * b * b * s * s * dMu[j];
+                dMuFaceRight[j] = 2 * a * a * s * s * dMu[j + 1];
+            }
+        } else {
+            for (int j = 0; j < n - 1; j++) {
+                double a = mu[j];
+                double b = mu[j + 1];
+                muFace[j] = 2 * a * b / (a + b);
+            }
         }
         if (constantConductivity && conductivityFixed) {
             return true;
@@ -511,7 +529,7 @@ public final class FilmDiscretization implements ImplicitSystem {
 
     @Override
     public void rate(double t, double[] state, double[] k) {
-        if (!evaluateProperties(state)) {
+        if (!evaluateProperties(state, false)) {
             throw new IllegalStateException("rate requested at an unusable state (temperature or property not positive)");
         }
         evaluateBalances(t, state);
@@ -631,7 +649,7 @@ public final class FilmDiscretization implements ImplicitSystem {
         int total = 0;
         for (int iteration = 1; iteration <= NEWTON_MAX_ITERATIONS; iteration++) {
             total++;
-            boolean usable = evaluateProperties(state);
+            boolean usable = evaluateProperties(state, !reuse);
             if (usable) {
                 evaluateBalances(t, state);
                 currentTime = t;
@@ -916,7 +934,7 @@ public final class FilmDiscretization implements ImplicitSystem {
      * @return false when a property is not usable at this state
      */
     public boolean update(double t, double[] state) {
-        if (!evaluateProperties(state)) {
+        if (!evaluateProperties(state, false)) {
             return false;
         }
         evaluateBalances(t, state);
