@@ -98,27 +98,35 @@ public final class BlockTridiagonalSolver {
      * overwritten; they may be the same array.
      */
     public void solve(double[] r, double[] x) {
-        double y0 = 0;
-        double y1 = 0;
-        for (int i = 0; i < n; i++) {
-            int k = 4 * i;
-            double s0 = r[2 * i];
-            double s1 = r[2 * i + 1];
-            if (i > 0) {
-                s0 -= aRef[k] * y0 + aRef[k + 1] * y1;
-                s1 -= aRef[k + 2] * y0 + aRef[k + 3] * y1;
-            }
-            y0 = inverseD[k] * s0 + inverseD[k + 1] * s1;
-            y1 = inverseD[k + 2] * s0 + inverseD[k + 3] * s1;
-            x[2 * i] = y0;
-            x[2 * i + 1] = y1;
+        // locals and running offsets keep both sweeps free of field loads and index arithmetic
+        final double[] a = aRef;
+        final double[] inv = inverseD;
+        final double[] gg = g;
+        final int m = n;
+        double s0 = r[0];
+        double s1 = r[1];
+        double y0 = inv[0] * s0 + inv[1] * s1;
+        double y1 = inv[2] * s0 + inv[3] * s1;
+        x[0] = y0;
+        x[1] = y1;
+        for (int k = 4, v = 2; v < 2 * m; k += 4, v += 2) {
+            s0 = r[v] - (a[k] * y0 + a[k + 1] * y1);
+            s1 = r[v + 1] - (a[k + 2] * y0 + a[k + 3] * y1);
+            y0 = inv[k] * s0 + inv[k + 1] * s1;
+            y1 = inv[k + 2] * s0 + inv[k + 3] * s1;
+            x[v] = y0;
+            x[v + 1] = y1;
         }
-        for (int i = n - 2; i >= 0; i--) {
-            int k = 4 * i;
-            double x0 = x[2 * i + 2];
-            double x1 = x[2 * i + 3];
-            x[2 * i] -= g[k] * x0 + g[k + 1] * x1;
-            x[2 * i + 1] -= g[k + 2] * x0 + g[k + 3] * x1;
+        double n0 = y0;
+        double n1 = y1;
+        for (int k = 4 * (m - 2), v = 2 * (m - 2); v >= 0; k -= 4, v -= 2) {
+            double c0 = x[v] - (gg[k] * n0 + gg[k + 1] * n1);
+            double c1 = x[v + 1] - (gg[k + 2] * n0 + gg[k + 3] * n1);
+            x[v] = c0;
+            x[v + 1] = c1;
+            n0 = c0;
+            n1 = c1;
         }
     }
+
 }
