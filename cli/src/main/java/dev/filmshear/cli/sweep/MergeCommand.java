@@ -27,6 +27,9 @@ public final class MergeCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", required = true, description = "the merged result folder")
     Path out;
 
+    @Option(names = {"-h", "--help"}, usageHelp = true, description = "show this help and exit")
+    boolean help;
+
     @Spec
     CommandSpec spec;
 

@@ -23,6 +23,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Optional;
 import java.util.PriorityQueue;
+import java.util.UUID;
 import java.util.stream.Stream;
 
 /**
@@ -54,6 +55,8 @@ final class ResultsFile {
     static final int RUN_ROWS = 4096;
     /** Scratch files merged at a time, well below any limit on open files. */
     static final int FAN_IN = 32;
+    private static final String TMP = ".tmp";
+    private static final String SORT_SCRATCH = ".sort-";
 
     private ResultsFile() {
     }
@@ -218,7 +221,7 @@ final class ResultsFile {
         if (inOrder(file)) {
             return;
         }
-        Path scratch = Files.createTempDirectory(file.toAbsolutePath().getParent(), ".sort-");
+        Path scratch = Files.createTempDirectory(file.toAbsolutePath().getParent(), SORT_SCRATCH);
         try {
             String header;
             List<Path> runs = new ArrayList<>();
@@ -343,10 +346,33 @@ final class ResultsFile {
         return counts;
     }
 
-    /** A temporary file beside {@code file}, in the same folder so that the final move is atomic. */
+    /**
+     * A new empty file beside {@code file}, in the same folder so that the final move is atomic, with the
+     * folder's usual permissions (not the owner-only ones of {@link Files#createTempFile}, which the
+     * results would keep after the move).
+     */
     static Path temporary(Path file) throws IOException {
         Path dir = file.toAbsolutePath().getParent();
-        return Files.createTempFile(dir, "." + file.getFileName() + "-", ".tmp");
+        return Files.createFile(dir.resolve("." + file.getFileName() + "-" + UUID.randomUUID() + TMP));
+    }
+
+    /** Removes temporary files and sort scratch folders that a killed process left in {@code dir}. */
+    static void removeLeftovers(Path dir) throws IOException {
+        try (Stream<Path> entries = Files.list(dir)) {
+            for (Path p : (Iterable<Path>) entries::iterator) {
+                String name = p.getFileName().toString();
+                if (name.startsWith(".") && name.endsWith(TMP) && Files.isRegularFile(p)) {
+                    Files.deleteIfExists(p);
+                } else if (name.startsWith(SORT_SCRATCH) && Files.isDirectory(p)) {
+                    try (Stream<Path> inside = Files.list(p)) {
+                        for (Path q : (Iterable<Path>) inside::iterator) {
+                            Files.deleteIfExists(q);
+                        }
+                    }
+                    Files.deleteIfExists(p);
+                }
+            }
+        }
     }
 
     /**

@@ -34,8 +34,10 @@ import java.util.concurrent.Callable;
         "A plan names a base case and its axes:",
         "  base = \"startup.toml\"",
         "  [axes]",
-        "  \"geometry.gap\" = { from = \"10 um\", to = \"60 um\", count = 6 }   # spacing = \"log\" optional",
-        "  \"upper_wall.velocity.to\" = [\"2 m/s\", \"10 m/s\", \"30 m/s\"]"})
+        "  \"geometry.gap\" = { from = \"10 um\", to = \"60 um\", count = 6 }",
+        "  \"upper_wall.velocity.to\" = [\"2 m/s\", \"10 m/s\", \"30 m/s\"]",
+        "A range may add spacing = \"log\". Optional: [sweep] maps = [\"max_temperature_K\", ...] and "
+                + "temperature_limit = \"120 degC\"."})
 public final class SweepCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "PLAN.toml", description = "the sweep plan")
@@ -52,6 +54,9 @@ public final class SweepCommand implements Callable<Integer> {
             description = "run only the K-th of N slices (cases i with i mod N = K-1); default from "
                     + "SLURM_ARRAY_TASK_ID and SLURM_ARRAY_TASK_COUNT in a Slurm job array, else 1/1")
     Shard shard;
+
+    @Option(names = {"-h", "--help"}, usageHelp = true, description = "show this help and exit")
+    boolean help;
 
     @Spec
     CommandSpec spec;

@@ -57,9 +57,12 @@ final class SweepData {
     final BitSet failedCases;
     /** Per flag, the ok cases that carry it. */
     final Map<String, BitSet> flags;
+    /** The plan's temperature limit (K), NaN when none. */
+    final double temperatureLimit;
 
     private SweepData(long ok, long failed, Map<String, Long> warningCounts, List<Failure> failures, boolean gridded,
-                      Map<String, double[]> values, BitSet okCases, BitSet failedCases, Map<String, BitSet> flags) {
+                      Map<String, double[]> values, BitSet okCases, BitSet failedCases, Map<String, BitSet> flags,
+                      double temperatureLimit) {
         this.ok = ok;
         this.failed = failed;
         this.warningCounts = warningCounts;
@@ -69,6 +72,7 @@ final class SweepData {
         this.okCases = okCases;
         this.failedCases = failedCases;
         this.flags = flags;
+        this.temperatureLimit = temperatureLimit;
     }
 
     /** True when a plan of this shape gets maps. */
@@ -152,7 +156,8 @@ final class SweepData {
                 }
             }
         }
-        return new SweepData(ok, failed, warningCounts, failures, gridded, values, okCases, failedCases, flags);
+        return new SweepData(ok, failed, warningCounts, failures, gridded, values, okCases, failedCases, flags,
+                plan.temperatureLimit());
     }
 
     private static List<String> written(SweepPlan plan, long index) {

@@ -176,7 +176,7 @@ final class SweepMaps {
                 }
             }
             if (!segments.isEmpty()) {
-                addSegments(chart, "boundary: " + flag.getKey(), segments, k++);
+                addSegments(chart, boundaryName(flag.getKey(), data), segments, k++);
             }
         }
         XYStyler styler = chart.getStyler();
@@ -185,6 +185,15 @@ final class SweepMaps {
         styler.setYAxisMin(y.min());
         styler.setYAxisMax(y.max());
         return chart;
+    }
+
+    /** The legend's name of a flag's boundary. */
+    private static String boundaryName(String flag, SweepData data) {
+        return switch (flag) {
+            case SweepData.OVER_LIMIT -> "boundary: max_temperature_K above " + Axis.Range.plain(data.temperatureLimit) + " K";
+            case SweepData.NOT_SETTLED -> "boundary: not settled by the end time";
+            default -> "boundary: " + flag;
+        };
     }
 
     private static boolean switches(BitSet ok, BitSet on, int a, int b) {
@@ -234,7 +243,7 @@ final class SweepMaps {
                 }
             }
             if (!segments.isEmpty()) {
-                addSegments(chart, "boundary: " + flag.getKey(), segments, k++);
+                addSegments(chart, boundaryName(flag.getKey(), data), segments, k++);
             }
         }
         chart.getStyler().setXAxisMin(x.min());
@@ -336,7 +345,9 @@ final class SweepMaps {
         }
         double a = Math.abs(v);
         if (a != 0 && (a >= 1e6 || a < 1e-3)) {
-            return String.format("%.3g", v).replace("e+0", "e").replace("e-0", "e-").replace("e+", "e");
+            String[] parts = String.format(java.util.Locale.ROOT, "%.3e", v).split("e");
+            String mantissa = parts[0].contains(".") ? parts[0].replaceAll("0+$", "").replaceAll("\\.$", "") : parts[0];
+            return mantissa + "e" + Integer.parseInt(parts[1]);
         }
         BigDecimal d = new BigDecimal(v).round(new MathContext(4)).stripTrailingZeros();
         return d.scale() < 0 ? d.toBigInteger().toString() : d.toPlainString();
@@ -530,12 +541,15 @@ final class SweepMaps {
                 }
                 return new AxisScale(axis.key(), title, position, p -> v -> rankLabel(names, v));
             }
-            if (axis.spacing() == Axis.Spacing.LOG && sorted[0] > 0) {
+            double sign = Math.signum(sorted[0]);
+            if (axis.spacing() == Axis.Spacing.LOG && sign != 0 && sign == Math.signum(sorted[n - 1])) {
+                // log10 of the magnitude; values below zero keep their sign in the labels
                 double[] position = new double[n];
                 for (int i = 0; i < n; i++) {
-                    position[i] = Math.log10(number[i]);
+                    position[i] = Math.log10(Math.abs(number[i]));
                 }
-                return new AxisScale(axis.key(), title + ", log scale", position, p -> v -> format(Math.pow(10, v)));
+                return new AxisScale(axis.key(), title + ", log scale", position,
+                        p -> v -> format(sign * Math.pow(10, v)));
             }
             return new AxisScale(axis.key(), title, number, p -> SweepMaps::format);
         }

@@ -250,6 +250,30 @@ class SweepCommandTest {
         assertTrue(Files.readString(out.resolve("report.html")).contains("Failed cases"));
     }
 
+    /**
+     * A solver failure is a failed row too: a steady heated channel flow whose viscosity falls
+     * exponentially with temperature has no steady solution at a steep pressure gradient (thermal
+     * runaway), while a gentle one settles.
+     */
+    @Test
+    void aCaseWithoutSteadySolutionIsAFailedRow(@TempDir Path dir) throws IOException {
+        copy(dir, "heated-channel.toml");
+        Path planFile = dir.resolve("gradients.toml");
+        Files.writeString(planFile, """
+                base = "heated-channel.toml"
+                [axes]
+                "pressure.gradient" = ["-1e7 Pa/m", "-1e11 Pa/m"]
+                """);
+        Path out = dir.resolve("out");
+        Outcome o = run("sweep", planFile.toString(), "--out", out.toString());
+        assertEquals(0, o.code(), o.err());
+        List<String> lines = Files.readAllLines(out.resolve("results.csv"));
+        assertEquals("ok", CsvLine.split(lines.get(1)).orElseThrow().get(1));
+        List<String> failed = CsvLine.split(lines.get(2)).orElseThrow();
+        assertEquals("failed", failed.get(1));
+        assertTrue(failed.get(2).startsWith("no steady solution"), failed.get(2));
+    }
+
     @Test
     void everyCaseFailedIsExitCodeThree(@TempDir Path dir) throws IOException {
         copy(dir, "startup.toml");
