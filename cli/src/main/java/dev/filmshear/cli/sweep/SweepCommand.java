@@ -47,7 +47,7 @@ public final class SweepCommand implements Callable<Integer> {
             description = "result folder (default: ./out/<plan name>, or ./out/<plan name>-shard-K-of-N)")
     Path out;
 
-    @Option(names = "--threads", paramLabel = "N", description = "worker threads (default: every core, here ${sys:filmshear.cores})")
+    @Option(names = "--threads", paramLabel = "N", description = "worker threads (default: every core)")
     Integer threads;
 
     @Option(names = "--shard", paramLabel = "K/N", converter = Shard.Converter.class,
@@ -60,10 +60,6 @@ public final class SweepCommand implements Callable<Integer> {
 
     @Spec
     CommandSpec spec;
-
-    static {
-        System.setProperty("filmshear.cores", Integer.toString(Runtime.getRuntime().availableProcessors()));
-    }
 
     @Override
     public Integer call() {

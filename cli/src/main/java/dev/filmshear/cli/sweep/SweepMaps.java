@@ -32,8 +32,9 @@ import java.util.function.Function;
  * second up). Each case is one cell, at the rank of its values along the axes and labelled with them,
  * filled with the colour of its value's band ({@link Bands}: round edges, listed in the legend). XChart's
  * own heat map has no way to mark cells or draw lines over them, so the cells are drawn as filled
- * polygons of an XY chart, one series per band. A failed case is a grey cell with a cross. Where a flag switches between neighbouring cells
- * (a warning code such as {@code laminar_flow_doubtful}, a film not settled by the end time, the
+ * polygons of an XY chart, one series per band. A failed case is a grey cell with a cross. Where a flag
+ * switches between neighbouring cells (a warning code such as {@code laminar_flow_doubtful}, a film not
+ * settled by the end time, the
  * temperature limit exceeded) a line is drawn on the edge between them: the boundary of the region where
  * the flag holds, so the safe operating envelope reads at a glance.
  *
@@ -190,7 +191,8 @@ final class SweepMaps {
     /** The legend's name of a flag's boundary. */
     private static String boundaryName(String flag, SweepData data) {
         return switch (flag) {
-            case SweepData.OVER_LIMIT -> "boundary: max_temperature_K above " + Axis.Range.plain(data.temperatureLimit) + " K";
+            case SweepData.OVER_LIMIT -> "boundary: max_temperature_K above "
+                    + Axis.Range.plain(data.temperatureLimit) + " K";
             case SweepData.NOT_SETTLED -> "boundary: not settled by the end time";
             default -> "boundary: " + flag;
         };
