@@ -1,6 +1,8 @@
 package dev.filmshear.cli;
 
 import dev.filmshear.cli.input.InputException;
+import dev.filmshear.cli.sweep.MergeCommand;
+import dev.filmshear.cli.sweep.SweepCommand;
 import dev.filmshear.solver.base.InvalidParameterException;
 import dev.filmshear.solver.base.NumericalFailureException;
 import picocli.CommandLine;
@@ -18,7 +20,8 @@ import java.io.UncheckedIOException;
 @Command(name = "filmshear", mixinStandardHelpOptions = true, versionProvider = FilmshearCommand.VersionProvider.class,
         description = "Transient and steady shear flow and shear heating of thin viscous films between moving walls.",
         subcommands = {RunCommand.class, CheckCommand.class, DemoCommand.class, FluidsCommand.class,
-                dev.filmshear.cli.fit.FitCommand.class, CommandLine.HelpCommand.class},
+                dev.filmshear.cli.fit.FitCommand.class, dev.filmshear.cli.sweep.SweepCommand.class,
+                dev.filmshear.cli.sweep.MergeCommand.class, CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n", exitCodeList = {}, footer = "")
 public final class FilmshearCommand implements Runnable {
 
