@@ -18,7 +18,8 @@ import java.io.UncheckedIOException;
 @Command(name = "filmshear", mixinStandardHelpOptions = true, versionProvider = FilmshearCommand.VersionProvider.class,
         description = "Transient and steady shear flow and shear heating of thin viscous films between moving walls.",
         subcommands = {RunCommand.class, CheckCommand.class, DemoCommand.class, FluidsCommand.class,
-                dev.filmshear.cli.fit.FitCommand.class, CommandLine.HelpCommand.class},
+                dev.filmshear.cli.fit.FitCommand.class, dev.filmshear.cli.verify.VerifyCommand.class,
+                CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n", exitCodeList = {}, footer = "")
 public final class FilmshearCommand implements Runnable {
 

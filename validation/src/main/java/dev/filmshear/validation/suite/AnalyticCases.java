@@ -29,6 +29,7 @@ import dev.filmshear.validation.analytic.StokesSecondProblem;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.function.DoubleUnaryOperator;
 
 /**
@@ -193,7 +194,7 @@ public final class AnalyticCases {
         return transientFilm("Stokes' second problem", exact.source(),
                 "rho du/dt = mu d2u/dy2 for y > 0, u(0, t) = U sin(omega t), u(y, 0) = 0, u -> 0 far away; "
                         + "rho = 870 kg/m^3, mu = 0.04 Pa s, U = 1 m/s, 50 Hz (penetration depth sqrt(2 nu/omega) = "
-                        + String.format("%.3g", delta * 1e3) + " mm); compared after 1.25 periods on a domain truncated "
+                        + String.format(Locale.ROOT, "%.3g", delta * 1e3) + " mm); compared after 1.25 periods on a domain truncated "
                         + "at 30 penetration depths, grid clustered at the wall (0.7)",
                 FilmCase.until(physics, end), STOKES_LAYER_CLUSTERING, exact, points, 1, options);
     }
@@ -386,7 +387,7 @@ public final class AnalyticCases {
                 "rho cp dT/dt = k d2T/dy2 + S, T(0, t) = T(h, t) = T0, T(y, 0) = T0, walls at rest; h = 100 um, "
                         + "rho = 870 kg/m^3, cp = 1950 J/(kg K), k = 0.13 W/(m K), S = mu (U/h)^2 with mu = 0.04 Pa s, "
                         + "U = 10 m/s; compared at alpha t/h^2 = 0.1",
-                together(1), togetherLevels(points, end, 1), checks, level -> {
+                together(1, options), togetherLevels(points, end, 1), checks, level -> {
                     FilmResult r = solveAt(base, level, 0, options);
                     Snapshot s = r.finalSnapshot();
                     double[] y = s.y();
@@ -406,7 +407,8 @@ public final class AnalyticCases {
                                                   double stepsPerInterval, SolverOptions options) {
         double end = base.endTime();
         boolean upper = exact.hasUpperWall();
-        return new VerificationCase(name, VerificationCase.Kind.ANALYTIC, source, equations, together(stepsPerInterval),
+        return new VerificationCase(name, VerificationCase.Kind.ANALYTIC, source, equations,
+                together(stepsPerInterval, options),
                 togetherLevels(points, end, stepsPerInterval), upper ? velocityAndBothStresses()
                         : List.of(Check.secondOrder("velocity, max over nodes", "m/s"),
                                 Check.secondOrder("wall shear stress, lower wall", "Pa")),
@@ -419,9 +421,11 @@ public final class AnalyticCases {
                 "grid only; steady solve (no time error)", gridLevels(points), checks, measurement);
     }
 
-    private static String together(double stepsPerInterval) {
-        return "grid and time step together: " + (stepsPerInterval == 1 ? "one TR-BDF2 step"
-                : stepsPerInterval + " TR-BDF2 steps") + " per grid interval, dt proportional to dy";
+    /** The refinement in words, naming the options' scheme. */
+    static String together(double stepsPerInterval, SolverOptions options) {
+        String scheme = options.scheme().name().replace('_', '-');
+        return "grid and time step together: " + (stepsPerInterval == 1 ? "one " + scheme + " step"
+                : stepsPerInterval + " " + scheme + " steps") + " per grid interval, dt proportional to dy";
     }
 
     private static List<Level> togetherLevels(int[] points, double end, double stepsPerInterval) {

@@ -38,8 +38,9 @@ public final class ManufacturedVerification {
             + "S_T = rho(T_m) cp dT_m/dt - k d2T_m/dy2 - mu(T_m) (du_m/dy)^2";
     /** The method's source. */
     public static final String SOURCE = "K. Salari, P. Knupp, Code Verification by the Method of Manufactured "
-            + "Solutions, Sandia report SAND2000-1444, 2000; sources derived in ManufacturedSolution "
-            + "(references.md 10.1)";
+            + "Solutions, Sandia report SAND2000-1444, 2000; source terms derived for filmshear by substituting the "
+            + "fields into the equations (dev.filmshear.validation.mms.ManufacturedSolution) and checked against a "
+            + "symbolic derivation";
 
     private ManufacturedVerification() {
     }
@@ -64,9 +65,7 @@ public final class ManufacturedVerification {
         }
         List<Check> checks = List.of(Check.secondOrder("velocity, max over nodes", "m/s"),
                 Check.secondOrder("temperature, max over nodes", "K"));
-        String scheme = options.scheme().name().replace('_', '-');
-        String refinement = "grid and time step together: " + (c.stepsPerInterval() == 1 ? "one " + scheme + " step"
-                : c.stepsPerInterval() + " " + scheme + " steps") + " per grid interval, dt proportional to dy";
+        String refinement = AnalyticCases.together(c.stepsPerInterval(), options);
         return new VerificationCase("MMS: " + c.name(), VerificationCase.Kind.MANUFACTURED, SOURCE, equations(c),
                 refinement, levels, checks, level -> {
                     FilmResult r = FilmSolver.solve(c.filmCase(level.points()),

@@ -95,6 +95,8 @@ class VerificationSuiteTest {
         double[] stalled = r.runs().get(3).observedOrders(0);
         assertTrue(stalled[stalled.length - 1] < 0.5, Arrays.toString(stalled));
         assertTrue(r.table().contains("FAIL"));
+        assertTrue(r.runs().get(1).verificationCase().refinement().contains("BACKWARD-EULER"),
+                "the table names the scheme that was run");
     }
 
     private static void assertFirstOrder(VerificationRun run, int check) {
