@@ -21,7 +21,8 @@ import java.io.UncheckedIOException;
         description = "Transient and steady shear flow and shear heating of thin viscous films between moving walls.",
         subcommands = {RunCommand.class, CheckCommand.class, DemoCommand.class, FluidsCommand.class,
                 dev.filmshear.cli.fit.FitCommand.class, dev.filmshear.cli.sweep.SweepCommand.class,
-                dev.filmshear.cli.sweep.MergeCommand.class, CommandLine.HelpCommand.class},
+                dev.filmshear.cli.sweep.MergeCommand.class, dev.filmshear.cli.verify.VerifyCommand.class,
+                CommandLine.HelpCommand.class},
         exitCodeListHeading = "%nExit codes:%n", exitCodeList = {}, footer = "")
 public final class FilmshearCommand implements Runnable {
 

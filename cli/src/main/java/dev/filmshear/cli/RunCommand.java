@@ -2,6 +2,7 @@ package dev.filmshear.cli;
 
 import dev.filmshear.cli.input.CaseFile;
 import dev.filmshear.cli.input.CaseReader;
+import dev.filmshear.cli.verify.ConvergenceRun;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -22,6 +23,10 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--out", paramLabel = "DIR", description = "result folder (default: ./out/<case name>)")
     Path out;
 
+    @Option(names = "--convergence", description = "solution verification: solve on three grids and report the "
+            + "observed order and grid convergence index of the wall shear stresses and highest temperature")
+    boolean convergence;
+
     @Spec
     CommandSpec spec;
 
@@ -29,6 +34,9 @@ final class RunCommand implements Callable<Integer> {
     public Integer call() {
         CaseFile file = new CaseReader().read(caseFile);
         Path dir = out != null ? out : Path.of("out", baseName(caseFile));
+        if (convergence) {
+            return ConvergenceRun.run(file, dir, spec.commandLine().getOut(), CaseRunner::run, CaseRunner::caseText);
+        }
         return CaseRunner.run(file, dir, spec.commandLine().getOut());
     }
 
