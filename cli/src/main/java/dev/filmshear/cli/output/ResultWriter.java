@@ -103,6 +103,7 @@ public final class ResultWriter {
         number(root, "max_temperature_K", s.maxTemperature());
         number(root, "mean_temperature_K", s.meanTemperature());
         number(root, "peak_temperature_K", s.peakTemperature());
+        number(root, "settle_time_s", s.settleTime());
         number(root, "dissipation_W_per_m2", s.dissipation());
         number(root, "reynolds_number", n.reynoldsNumber());
         ArrayNode warnings = root.putArray("warnings");

@@ -32,8 +32,8 @@ final class SweepData {
     /** Flag of a case whose highest temperature exceeds the plan's limit. */
     static final String OVER_LIMIT = "temperature_limit_exceeded";
     /** Columns mapped when the plan chooses none; empty ones are left out when drawing. */
-    static final List<String> DEFAULT_MAPS = List.of("max_temperature_K", "wall_shear_stress_upper_Pa",
-            "dissipation_W_per_m2", "friction_power_W");
+    static final List<String> DEFAULT_MAPS = List.of("peak_temperature_K", "wall_shear_stress_upper_Pa",
+            "dissipation_W_per_m2", "friction_power_W", "settle_time_s");
 
     /**
      * A failed case for the report.

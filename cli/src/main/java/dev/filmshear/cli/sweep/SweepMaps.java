@@ -121,6 +121,8 @@ final class SweepMaps {
             case "friction_power_W" -> "Friction power (W)";
             case "friction_torque_N_m" -> "Friction torque (N m)";
             case "mean_temperature_K" -> "Mean film temperature (K)";
+            case "peak_temperature_K" -> "Highest film temperature during the run (K)";
+            case "settle_time_s" -> "Time for the wall shear stress to settle within 1 % (s)";
             default -> column;
         };
     }

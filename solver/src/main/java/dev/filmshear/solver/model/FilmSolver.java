@@ -23,6 +23,8 @@ public final class FilmSolver {
      * change times the slowest time scale, is below this fraction of the velocity and temperature scales.
      */
     public static final double STEADY_THRESHOLD = 1e-3;
+    /** The band around the final wall shear stress that defines the settling time. */
+    public static final double SETTLE_BAND = 0.01;
     /** Relative energy imbalance above which a run carries a warning. */
     public static final double ENERGY_IMBALANCE_LIMIT = 0.01;
     /**
@@ -185,7 +187,8 @@ public final class FilmSolver {
                 dissipation, fluxLower, fluxUpper, dissipated, conducted, stored, imbalance, steps,
                 model.integrator().rejectedSteps(), model.integrator().newtonIterations(), torque, power, petroff,
                 tracker.speedRiseTime(), Double.isNaN(fraction) ? Double.NaN : tracker.coastDownTime(fraction),
-                Math.max(tracker.maxTemperature(), Double.isNaN(maxT) ? Double.NEGATIVE_INFINITY : maxT));
+                Math.max(tracker.maxTemperature(), Double.isNaN(maxT) ? Double.NEGATIVE_INFINITY : maxT),
+                Double.isFinite(time) ? tracker.settleTime(SETTLE_BAND) : Double.NaN);
     }
 
     private static double drivenFraction(FilmPhysics physics) {

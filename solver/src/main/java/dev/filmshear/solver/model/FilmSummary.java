@@ -32,6 +32,8 @@ package dev.filmshear.solver.model;
  * @param coastDownTime driven wall only: the time its speed first fell to the coast-down fraction of its
  *     initial speed (s), NaN when it did not
  * @param peakTemperature the highest film temperature reached at any step of the run (K)
+ * @param settleTime the time after which the wall shear stress stayed within 1 % of its value at the end of
+ *     the run (s); meaningful when the run ended steady, NaN for a steady solve
  */
 public record FilmSummary(boolean steady, double endTime, double wallShearStressLower, double wallShearStressUpper,
                           double lowerWallTemperature, double upperWallTemperature, double maxTemperature,
@@ -39,5 +41,6 @@ public record FilmSummary(boolean steady, double endTime, double wallShearStress
                           double heatFluxIntoUpperWall, double dissipatedEnergy, double conductedEnergy,
                           double storedEnergyChange, double energyImbalance, long steps, long rejectedSteps,
                           long newtonIterations, double frictionTorque, double frictionPower, double petroffTorque,
-                          double speedRiseTime, double coastDownTime, double peakTemperature) {
+                          double speedRiseTime, double coastDownTime, double peakTemperature,
+                          double settleTime) {
 }

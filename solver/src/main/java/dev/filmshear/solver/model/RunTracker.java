@@ -18,6 +18,9 @@ final class RunTracker implements FilmObserver {
     private double[] times = new double[256];
     private double[] speeds = new double[256];
     private int samples;
+    private double[] shearTimes = new double[256];
+    private double[] shears = new double[256];
+    private int shearSamples;
 
     /** @param physics the case's physics, to know which wall (if any) is driven */
     RunTracker(FilmPhysics physics) {
@@ -38,6 +41,16 @@ final class RunTracker implements FilmObserver {
             minTemperature = Math.min(minTemperature, t);
         }
         maxSpeed = Math.max(maxSpeed, Math.max(Math.abs(s.lowerWallVelocity()), Math.abs(s.upperWallVelocity())));
+        if (s.steps() > 0) {
+            if (shearSamples == shearTimes.length) {
+                shearTimes = Arrays.copyOf(shearTimes, 2 * shearSamples);
+                shears = Arrays.copyOf(shears, 2 * shearSamples);
+            }
+            double upper = s.wallShearStressUpper();
+            shearTimes[shearSamples] = s.time();
+            shears[shearSamples] = Double.isNaN(upper) ? s.wallShearStressLower() : upper;
+            shearSamples++;
+        }
         if (drivenWall >= 0) {
             if (samples == times.length) {
                 times = Arrays.copyOf(times, 2 * samples);
@@ -80,6 +93,25 @@ final class RunTracker implements FilmObserver {
             return Double.NaN;
         }
         return crossing(fraction * speeds[0]);
+    }
+
+    /**
+     * The time after which the wall shear stress (at the upper wall, or the lower of a semi-infinite film)
+     * stays within {@code fraction} of its final value: the last step at which it was farther away. NaN
+     * before any step; 0 when it never left the band.
+     */
+    double settleTime(double fraction) {
+        if (shearSamples == 0) {
+            return Double.NaN;
+        }
+        double last = shears[shearSamples - 1];
+        double band = fraction * Math.abs(last);
+        for (int k = shearSamples - 1; k >= 0; k--) {
+            if (Math.abs(shears[k] - last) > band) {
+                return k + 1 < shearSamples ? shearTimes[k + 1] : shearTimes[k];
+            }
+        }
+        return shearTimes[0];
     }
 
     /** First time the speed passes {@code level}, interpolated linearly between steps; NaN when it never does. */

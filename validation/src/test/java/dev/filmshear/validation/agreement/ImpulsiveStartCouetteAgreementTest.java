@@ -83,6 +83,10 @@ class ImpulsiveStartCouetteAgreementTest {
         assertEquals(0.292900, result.history().get(dev.filmshear.solver.model.History.Column.WALL_SHEAR_STRESS_LOWER,
                 row) / shearScale, 1e-3);
         assertTrue(result.summary().steady(), "settled by tau = 1");
+        // the moving-wall shear 1 + 2 sum exp(-n^2 pi^2 tau) comes within 1 % of its steady value at
+        // tau = ln(200) / pi^2 = 0.53683 (the n = 1 term, later terms below 1e-10 there)
+        double settle = Math.log(200) / (Math.PI * Math.PI);
+        assertEquals(settle, result.summary().settleTime() / DIFFUSION_TIME, 0.01 * settle);
     }
 
     /**
