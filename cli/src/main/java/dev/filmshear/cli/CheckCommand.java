@@ -94,8 +94,10 @@ final class CheckCommand implements Callable<Integer> {
         out.printf("  Reynolds number     %.6g%s%n", n.reynoldsNumber(),
                 p.isSemiInfinite() ? " (on the penetration depth)" : " (U*gap/nu)");
         if (!p.isSemiInfinite()) {
-            out.printf("  momentum time scale %.6g s (slowest mode of the discrete operator; gap^2/(pi^2 nu) = %.6g s)%n",
-                    n.momentumTimeScale(), n.momentumTimeScaleAnalytic());
+            double ejml = new dev.filmshear.solver.model.FilmModel(c,
+                    dev.filmshear.solver.model.SolverOptions.defaults()).momentumTimeScale(true);
+            out.printf("  momentum time scale %.6g s (slowest mode of the discrete operator, EJML QR %.6g s; "
+                    + "gap^2/(pi^2 nu) = %.6g s)%n", n.momentumTimeScale(), ejml, n.momentumTimeScaleAnalytic());
         } else {
             out.printf("  truncated depth     %.6g m%n", n.depth());
         }

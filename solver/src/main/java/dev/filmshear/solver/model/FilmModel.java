@@ -185,11 +185,20 @@ public final class FilmModel implements FilmState {
 
     /**
      * The time constant (s) of the slowest velocity mode: 1 / lambda_min of the discrete momentum diffusion
-     * operator M^-1 K at the current viscosities, computed with EJML. For a constant-viscosity film between
+     * operator M^-1 K at the current viscosities (by inverse iteration; EJML's QR is the reference, see
+     * {@link SymmetricTridiagonalEigen}). For a constant-viscosity film between
      * two walls it tends to gap^2 / (pi^2 nu) as the grid is refined. NaN for a semi-infinite film, whose
      * truncated domain has no physical slowest mode.
      */
     public double momentumTimeScale() {
+        return momentumTimeScale(false);
+    }
+
+    /**
+     * The slowest velocity mode's time constant as {@link #momentumTimeScale()}, computed with EJML's full
+     * symmetric QR when {@code withEjml} (the reference, O(n^2)) or by inverse iteration (O(n)).
+     */
+    public double momentumTimeScale(boolean withEjml) {
         if (physics.isSemiInfinite()) {
             return Double.NaN;
         }
@@ -198,7 +207,8 @@ public final class FilmModel implements FilmState {
         double[] diagonal = new double[m];
         double[] off = new double[Math.max(0, m - 1)];
         discretization.momentumDiffusionOperator(diagonal, off);
-        return 1 / SymmetricTridiagonalEigen.smallest(diagonal, off);
+        return 1 / (withEjml ? SymmetricTridiagonalEigen.smallest(diagonal, off)
+                : SymmetricTridiagonalEigen.smallestPositiveDefinite(diagonal, off));
     }
 
     /**

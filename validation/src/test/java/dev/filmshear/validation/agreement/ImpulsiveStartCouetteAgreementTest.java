@@ -1,7 +1,9 @@
 package dev.filmshear.validation.agreement;
 
 import dev.filmshear.solver.model.FilmCase;
+import dev.filmshear.solver.model.FilmModel;
 import dev.filmshear.solver.model.FilmResult;
+import dev.filmshear.solver.model.SolverOptions;
 import dev.filmshear.solver.model.FilmSolver;
 import dev.filmshear.solver.model.GridSpec;
 import dev.filmshear.solver.model.Snapshot;
@@ -102,5 +104,9 @@ class ImpulsiveStartCouetteAgreementTest {
         double expectedRelative = Math.pow(Math.PI * dy / GAP, 2) / 12;
         double relative = result.numbers().momentumTimeScale() / continuous - 1;
         assertEquals(expectedRelative, relative, 0.05 * expectedRelative);
+        // the inverse iteration behind the summary equals EJML's full symmetric QR
+        FilmModel model = new FilmModel(result.filmCase(), SolverOptions.defaults());
+        assertEquals(model.momentumTimeScale(true), result.numbers().momentumTimeScale(),
+                1e-10 * result.numbers().momentumTimeScale());
     }
 }
