@@ -81,19 +81,17 @@ final class CaseSolver {
         fields.add(failure == null ? ResultColumns.OK : ResultColumns.FAILED);
         fields.add(failure == null ? "" : oneLine(failure));
         if (summary == null) {
-            fields.add("");
-            fields.add("");
-            for (int k = 0; k < ResultColumns.SUMMARY_KEYS.size(); k++) {
+            for (int k = 0; k < ResultColumns.SUMMARY_KEYS.size() + 2; k++) {
                 fields.add("");
             }
         } else {
+            for (String key : ResultColumns.SUMMARY_KEYS) {
+                fields.add(number(summary.get(key)));
+            }
             List<String> codes = new ArrayList<>();
             summary.path("warning_codes").forEach(code -> codes.add(code.asText()));
             fields.add(String.join(";", codes));
             fields.add(summary.path("steady").asText(""));
-            for (String key : ResultColumns.SUMMARY_KEYS) {
-                fields.add(number(summary.get(key)));
-            }
         }
         fields.add(Long.toString(index));
         StringBuilder line = new StringBuilder(512);

@@ -9,11 +9,11 @@ import java.util.List;
  *   <li>one column per axis, named by its dotted case key, holding the axis value in SI units;</li>
  *   <li>{@code status} ({@code ok} or {@code failed}) and {@code message} (empty when ok; otherwise the
  *       failure on one line) as the contract fixes them;</li>
- *   <li>two extensions that are not numbers: {@code warning_codes} (the codes of the case's warnings
- *       joined by {@code ;}) and {@code steady} ({@code true} when the film had settled);</li>
- *   <li>every numeric key of summary.json, in the order of {@link #SUMMARY_KEYS};</li>
- *   <li>{@code case_index}, the case's position in the plan, last so that the contract's columns keep
- *       their places.</li>
+ *   <li>every numeric key of summary.json, in the order of {@link #SUMMARY_KEYS}, as the contract fixes
+ *       them;</li>
+ *   <li>three extensions, after the contract's columns so those keep their places: {@code warning_codes}
+ *       (the codes of the case's warnings joined by {@code ;}), {@code steady} ({@code true} when the film
+ *       had settled) and {@code case_index}, the case's position in the plan, last.</li>
  * </ol>
  * Numbers are written as the shortest decimal that reads back to the same double; a value that is not
  * defined for a case (the upper wall of a semi-infinite film, temperatures of an isothermal one) is an
@@ -94,9 +94,9 @@ public final class ResultColumns {
         List<String> all = new ArrayList<>(axisKeys);
         all.add(STATUS);
         all.add(MESSAGE);
+        all.addAll(SUMMARY_KEYS);
         all.add(WARNING_CODES);
         all.add(STEADY);
-        all.addAll(SUMMARY_KEYS);
         all.add(CASE_INDEX);
         this.names = List.copyOf(all);
     }
@@ -128,7 +128,7 @@ public final class ResultColumns {
 
     /** The position of the warning codes column. */
     public int warningColumn() {
-        return axes + 2;
+        return names.size() - 3;
     }
 
     /** The position of the case index column (the last). */
