@@ -91,12 +91,6 @@ public final class AnalyticCases {
      */
     static final int NAHME_COARSEST = 41;
     /**
-     * Most levels of the steady cases with a flux wall on clustered grids: the steady solver's continuation fails on
-     * 321 clustered nodes with an adiabatic wall (Couette viscous heating) and on 641 (Nahme, adiabatic wall); see
-     * the package comment. Four levels keep them inside what the solver can do today.
-     */
-    static final int FLUX_WALL_MAX_LEVELS = 4;
-    /**
      * Clustering of the oscillating Stokes layer's grid: with 0.5 the wall shear stress reaches its asymptotic order
      * only from about 161 nodes (observed 1.54, 1.82, 1.92 from 21 nodes on), with 0.7 from 21 (2.00; measured).
      */
@@ -111,7 +105,7 @@ public final class AnalyticCases {
      */
     public static List<VerificationCase> all(int levels, SolverOptions options) {
         int[] standard = doubling(COARSEST, levels);
-        int[] fluxWall = doubling(COARSEST, Math.min(levels, FLUX_WALL_MAX_LEVELS));
+        int[] fluxWall = doubling(COARSEST, levels);
         List<VerificationCase> cases = new ArrayList<>();
         cases.add(couetteStartUp(standard, options));
         cases.add(stokesFirstProblem(standard, options));
@@ -122,7 +116,7 @@ public final class AnalyticCases {
         cases.add(viscousHeatingTwoTemperatures(standard));
         cases.add(viscousHeatingAdiabaticWall(fluxWall));
         cases.add(nahmeBothWallsAtT0(doubling(NAHME_COARSEST, levels)));
-        cases.add(nahmeAdiabaticWallClustered(doubling(NAHME_COARSEST, Math.min(levels, FLUX_WALL_MAX_LEVELS))));
+        cases.add(nahmeAdiabaticWallClustered(doubling(NAHME_COARSEST, levels)));
         cases.add(heatedFilmStartUp(standard, options));
         return cases;
     }
