@@ -23,13 +23,8 @@ import java.nio.file.Path;
  * in Pa s (dynamic laws) or mm^2/s (walther).
  */
 final class FitPlot {
-    /**
-     * The palette of output/Plots.java (private there): dark teal for the law, burnt orange for the
-     * points, then the rest in the same order.
-     */
-    private static final Color[] PALETTE = {
-            new Color(0x1b6f6a), new Color(0xc0612b), new Color(0x4a5c8c), new Color(0x7a8a2e),
-            new Color(0x8c4a7a), new Color(0xb59a4a), new Color(0x3a3a3a)};
+    /** The tool's palette (output/Plots): dark teal for the law, burnt orange for the points. */
+    private static final Color[] PALETTE = dev.filmshear.cli.output.Plots.palette();
     private static final int WIDTH = 900;
     private static final int HEIGHT = 560;
     /** Points along the fitted curve: smooth at this width. */

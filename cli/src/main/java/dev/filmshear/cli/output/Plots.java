@@ -25,7 +25,10 @@ import java.util.List;
  * film the temperature and viscosity profiles and the highest temperature over time.
  */
 public final class Plots {
-    /** Our own palette: dark teal, burnt orange, slate blue, olive, plum, sand, charcoal. */
+    /**
+     * Our own palette: dark teal, burnt orange, slate blue, olive, plum, sand, charcoal. Every chart of the tool
+     * draws from it (use {@link #color(int)}).
+     */
     private static final Color[] PALETTE = {
             new Color(0x1b6f6a), new Color(0xc0612b), new Color(0x4a5c8c), new Color(0x7a8a2e),
             new Color(0x8c4a7a), new Color(0xb59a4a), new Color(0x3a3a3a)};
@@ -35,6 +38,16 @@ public final class Plots {
     private static final int MAX_PROFILES = 7;
 
     private Plots() {
+    }
+
+    /** Colour {@code k} of the palette, cycling. */
+    public static Color color(int k) {
+        return PALETTE[Math.floorMod(k, PALETTE.length)];
+    }
+
+    /** The palette as a fresh array, for XChart's series colours. */
+    public static Color[] palette() {
+        return PALETTE.clone();
     }
 
     /** Writes every plot of the run into {@code dir}. */

@@ -6,12 +6,12 @@ package dev.filmshear.cli.report;
  * entities, and the control characters that neither HTML nor XML allow in a document become U+FFFD, so the page
  * stays well-formed whatever a title or a case file holds.
  */
-final class Html {
+public final class Html {
     private Html() {
     }
 
     /** The text, safe inside an element or a double- or single-quoted attribute value. */
-    static String escape(String text) {
+    public static String escape(String text) {
         StringBuilder out = new StringBuilder(text.length() + 16);
         for (int i = 0; i < text.length(); i++) {
             char c = text.charAt(i);

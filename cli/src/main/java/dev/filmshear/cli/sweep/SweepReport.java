@@ -146,20 +146,8 @@ final class SweepReport {
                 + ") has a value in any case that finished.";
     }
 
-    /** Text for HTML: the five special characters escaped. */
+    /** Text for HTML, through the run report's escaper. */
     static String esc(String text) {
-        StringBuilder out = new StringBuilder(text.length() + 16);
-        for (int i = 0; i < text.length(); i++) {
-            char c = text.charAt(i);
-            switch (c) {
-                case '&' -> out.append("&amp;");
-                case '<' -> out.append("&lt;");
-                case '>' -> out.append("&gt;");
-                case '"' -> out.append("&quot;");
-                case '\'' -> out.append("&#39;");
-                default -> out.append(c);
-            }
-        }
-        return out.toString();
+        return dev.filmshear.cli.report.Html.escape(text);
     }
 }

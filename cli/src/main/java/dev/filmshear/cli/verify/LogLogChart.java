@@ -21,10 +21,6 @@ import java.nio.file.Path;
  * carry labelled ticks.
  */
 final class LogLogChart {
-    /** The palette of output/Plots.java (private there): dark teal, burnt orange, slate blue, olive, plum, sand. */
-    private static final Color[] PALETTE = {
-            new Color(0x1b6f6a), new Color(0xc0612b), new Color(0x4a5c8c), new Color(0x7a8a2e),
-            new Color(0x8c4a7a), new Color(0xb59a4a)};
     private static final Color REFERENCE = new Color(0x8a8a8a);
     private static final int WIDTH = 820;
     private static final int HEIGHT = 500;
@@ -57,7 +53,7 @@ final class LogLogChart {
     /** Adds measured points (x, y all above zero) as markers joined by a line. */
     void points(String name, double[] x, double[] y) {
         XYSeries s = chart.addSeries(name, x, y);
-        Color color = PALETTE[series % PALETTE.length];
+        Color color = dev.filmshear.cli.output.Plots.color(series);
         s.setLineColor(color);
         s.setMarkerColor(color);
         s.setMarker(SeriesMarkers.CIRCLE);

@@ -406,24 +406,8 @@ public final class VerificationReport {
         return "case-" + slug(name);
     }
 
-    /**
-     * Text safe in an element or a quoted attribute: {@code & < > " '} as entities, and the control characters an
-     * XML document may not hold as U+FFFD. The run report's escaper (report/Html.java) does the same but is not
-     * visible from this package; no library of the project offers one.
-     */
+    /** Text for HTML, through the run report's escaper. */
     static String esc(String text) {
-        StringBuilder out = new StringBuilder(text.length() + 16);
-        for (int i = 0; i < text.length(); i++) {
-            char c = text.charAt(i);
-            switch (c) {
-                case '&' -> out.append("&amp;");
-                case '<' -> out.append("&lt;");
-                case '>' -> out.append("&gt;");
-                case '"' -> out.append("&quot;");
-                case '\'' -> out.append("&#39;");
-                default -> out.append(c >= 0x20 || c == '\t' || c == '\n' || c == '\r' ? c : '\uFFFD');
-            }
-        }
-        return out.toString();
+        return dev.filmshear.cli.report.Html.escape(text);
     }
 }
