@@ -17,7 +17,35 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /** The command line end to end, in-process: exit codes, result files and their contract headers and keys. */
-class CommandLineTest {
+public class CommandLineTest {
+
+    /**
+     * A heated film whose walls pour in heat until its density law (thermal expansion 0.0099 1/K) would give no
+     * positive density, about 101 K above the reference, well within the 10 ms asked for: a run that must fail
+     * part-way. Line 20 holds [time] end.
+     */
+    public static final String OVERHEATING_CASE = """
+                title = "heat poured in until the density law breaks down"
+                [geometry]
+                gap = "25 um"
+                [fluid]
+                density = "860 kg/m^3"
+                thermal_expansion = "0.0099 1/K"
+                specific_heat = "1950 J/(kg*K)"
+                thermal_conductivity = "0.13 W/(m*K)"
+                [fluid.viscosity]
+                law = "constant"
+                value = "30 mPa*s"
+                [lower_wall]
+                heat_flux = "5e7 W/m^2"
+                [upper_wall]
+                velocity = "1 m/s"
+                heat_flux = "5e7 W/m^2"
+                [initial]
+                temperature = "40 degC"
+                [time]
+                end = "10 ms"
+                """;
 
     /** Output of one in-process run. */
     record Outcome(int code, String out, String err) {
@@ -139,28 +167,7 @@ class CommandLineTest {
     @Test
     void aFailedRunKeepsWhatItComputedWithExitCodeThree(@TempDir Path dir) throws IOException {
         Path caseFile = dir.resolve("overheat.toml");
-        Files.writeString(caseFile, """
-                title = "heat poured in until the density law breaks down"
-                [geometry]
-                gap = "25 um"
-                [fluid]
-                density = "860 kg/m^3"
-                thermal_expansion = "0.0099 1/K"
-                specific_heat = "1950 J/(kg*K)"
-                thermal_conductivity = "0.13 W/(m*K)"
-                [fluid.viscosity]
-                law = "constant"
-                value = "30 mPa*s"
-                [lower_wall]
-                heat_flux = "5e7 W/m^2"
-                [upper_wall]
-                velocity = "1 m/s"
-                heat_flux = "5e7 W/m^2"
-                [initial]
-                temperature = "40 degC"
-                [time]
-                end = "10 ms"
-                """);
+        Files.writeString(caseFile, OVERHEATING_CASE);
         Path out = dir.resolve("out");
         Outcome o = run("run", caseFile.toString(), "--out", out.toString());
         assertEquals(3, o.code(), o.err());

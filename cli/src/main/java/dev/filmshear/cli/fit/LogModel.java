@@ -29,7 +29,7 @@ import java.util.List;
  * best grid point is the start. This avoids the local minima and the divergence at T = c that a fixed
  * guess runs into.
  */
-sealed interface LogModel permits LogModel.Exponential, LogModel.Vogel, LogModel.Power, LogModel.Sutherland {
+sealed interface LogModel permits LogModel.Straight, LogModel.Vogel, LogModel.Sutherland {
 
     /** Points of the grid over the non-linear parameter for the start values. */
     int START_GRID = 161;
@@ -93,60 +93,84 @@ sealed interface LogModel permits LogModel.Exponential, LogModel.Vogel, LogModel
     }
 
     /**
-     * Exponential law, ln mu = ln R - beta (T - Tr); p = (ln R, beta).
-     *
-     * @param referenceTemperature Tr (K), held fixed
+     * A law that is a straight line in fit coordinates, ln mu = ln R + k x(T), with p = (ln R, k) unbounded:
+     * the exponential and power laws. Linear regression of ln mu on x already gives the least-squares
+     * optimum, which is the start.
      */
-    record Exponential(double referenceTemperature) implements LogModel {
+    sealed interface Straight extends LogModel permits Exponential, Power {
+
+        /** The abscissa x(T) the law is straight in. */
+        double abscissa(double t);
+
+        /** What the fit calls the law in messages. */
+        String label();
+
         @Override
-        public int size() {
+        default int size() {
             return 2;
         }
 
         @Override
-        public double[] start(double[] temperatures, double[] lnMu) {
+        default double[] start(double[] temperatures, double[] lnMu) {
             double[] x = new double[temperatures.length];
             for (int i = 0; i < x.length; i++) {
-                x[i] = temperatures[i] - referenceTemperature;
+                x[i] = abscissa(temperatures[i]);
             }
             SimpleRegression r = line(x, lnMu);
-            return new double[] {r.getIntercept(), -r.getSlope()};
+            return new double[] {r.getIntercept(), r.getSlope()};
         }
 
         @Override
-        public double value(double[] p, double t) {
-            return p[0] - p[1] * (t - referenceTemperature);
+        default double value(double[] p, double t) {
+            return p[0] + p[1] * abscissa(t);
         }
 
         @Override
-        public void gradient(double[] p, double t, double[] out) {
+        default void gradient(double[] p, double t, double[] out) {
             out[0] = 1;
-            out[1] = -(t - referenceTemperature);
+            out[1] = abscissa(t);
         }
 
         @Override
-        public double[] lower() {
+        default double[] lower() {
             return new double[] {Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
         }
 
         @Override
-        public double[] upper() {
+        default double[] upper() {
             return new double[] {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY};
         }
 
         @Override
-        public String boundNote(int k, boolean upperEnd) {
-            throw new IllegalStateException("the exponential fit has no bounds");
+        default String boundNote(int k, boolean upperEnd) {
+            throw new IllegalStateException("the " + label() + " fit has no bounds");
         }
 
         @Override
-        public double[] natural(double[] p) {
+        default double[] natural(double[] p) {
             return new double[] {Math.exp(p[0]), p[1]};
         }
 
         @Override
-        public double[] naturalDerivative(double[] p) {
+        default double[] naturalDerivative(double[] p) {
             return new double[] {Math.exp(p[0]), 1};
+        }
+    }
+
+    /**
+     * Exponential law, ln mu = ln R - beta (T - Tr); p = (ln R, beta), straight in x = -(T - Tr).
+     *
+     * @param referenceTemperature Tr (K), held fixed
+     */
+    record Exponential(double referenceTemperature) implements Straight {
+        @Override
+        public double abscissa(double t) {
+            return -(t - referenceTemperature);
+        }
+
+        @Override
+        public String label() {
+            return "exponential";
         }
 
         @Override
@@ -281,56 +305,15 @@ sealed interface LogModel permits LogModel.Exponential, LogModel.Vogel, LogModel
      *
      * @param referenceTemperature Tr (K), held fixed
      */
-    record Power(double referenceTemperature) implements LogModel {
+    record Power(double referenceTemperature) implements Straight {
         @Override
-        public int size() {
-            return 2;
+        public double abscissa(double t) {
+            return Math.log(t / referenceTemperature);
         }
 
         @Override
-        public double[] start(double[] temperatures, double[] lnMu) {
-            double[] x = new double[temperatures.length];
-            for (int i = 0; i < x.length; i++) {
-                x[i] = Math.log(temperatures[i] / referenceTemperature);
-            }
-            SimpleRegression r = line(x, lnMu);
-            return new double[] {r.getIntercept(), r.getSlope()};
-        }
-
-        @Override
-        public double value(double[] p, double t) {
-            return p[0] + p[1] * Math.log(t / referenceTemperature);
-        }
-
-        @Override
-        public void gradient(double[] p, double t, double[] out) {
-            out[0] = 1;
-            out[1] = Math.log(t / referenceTemperature);
-        }
-
-        @Override
-        public double[] lower() {
-            return new double[] {Double.NEGATIVE_INFINITY, Double.NEGATIVE_INFINITY};
-        }
-
-        @Override
-        public double[] upper() {
-            return new double[] {Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY};
-        }
-
-        @Override
-        public String boundNote(int k, boolean upperEnd) {
-            throw new IllegalStateException("the power-law fit has no bounds");
-        }
-
-        @Override
-        public double[] natural(double[] p) {
-            return new double[] {Math.exp(p[0]), p[1]};
-        }
-
-        @Override
-        public double[] naturalDerivative(double[] p) {
-            return new double[] {Math.exp(p[0]), 1};
+        public String label() {
+            return "power-law";
         }
 
         @Override

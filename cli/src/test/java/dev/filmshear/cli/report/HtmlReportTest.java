@@ -239,28 +239,7 @@ class HtmlReportTest {
     void aFailedRunsReportSaysItStoppedEarlyAndWhy() throws IOException {
         // the same overheating case as CommandLineTest: the density law breaks down within the 10 ms asked for
         Path caseFile = work.resolve("overheat.toml");
-        Files.writeString(caseFile, """
-                title = "heat poured in until the density law breaks down"
-                [geometry]
-                gap = "25 um"
-                [fluid]
-                density = "860 kg/m^3"
-                thermal_expansion = "0.0099 1/K"
-                specific_heat = "1950 J/(kg*K)"
-                thermal_conductivity = "0.13 W/(m*K)"
-                [fluid.viscosity]
-                law = "constant"
-                value = "30 mPa*s"
-                [lower_wall]
-                heat_flux = "5e7 W/m^2"
-                [upper_wall]
-                velocity = "1 m/s"
-                heat_flux = "5e7 W/m^2"
-                [initial]
-                temperature = "40 degC"
-                [time]
-                end = "10 ms"
-                """);
+        Files.writeString(caseFile, dev.filmshear.cli.CommandLineTest.OVERHEATING_CASE);
         Path out = work.resolve("overheat");
         assertEquals(3, run("run", caseFile.toString(), "--out", out.toString()));
         JsonNode summary = summary(out);

@@ -24,7 +24,7 @@ import dev.filmshear.solver.base.InvalidParameterException;
  * @param pressureGradient dp/dx (Pa/m)
  */
 public record CouettePoiseuilleFlow(double gap, double viscosity, double lowerVelocity, double upperVelocity,
-                                    double pressureGradient) implements AnalyticSolution {
+                                    double pressureGradient) implements SteadySolution {
 
     public CouettePoiseuilleFlow {
         InvalidParameterException.requirePositive("gap", gap, "m");
@@ -115,27 +115,4 @@ public record CouettePoiseuilleFlow(double gap, double viscosity, double lowerVe
                 + "(section number from memory)";
     }
 
-    /** Only the steady state, t = +infinity. */
-    @Override
-    public boolean appliesAt(double t) {
-        return t == Double.POSITIVE_INFINITY;
-    }
-
-    @Override
-    public double velocity(double y, double t) {
-        Checks.time(appliesAt(t), t, "+infinity (a steady solution)");
-        return velocity(y);
-    }
-
-    @Override
-    public double wallShearStressLower(double t) {
-        Checks.time(appliesAt(t), t, "+infinity (a steady solution)");
-        return wallShearStressLower();
-    }
-
-    @Override
-    public double wallShearStressUpper(double t) {
-        Checks.time(appliesAt(t), t, "+infinity (a steady solution)");
-        return wallShearStressUpper();
-    }
 }

@@ -36,7 +36,7 @@ import java.util.Objects;
  */
 public record CouetteViscousHeating(double gap, double viscosity, double conductivity, double lowerVelocity,
                                     double upperVelocity, ThermalCondition lower, ThermalCondition upper)
-        implements AnalyticSolution {
+        implements SteadySolution {
 
     public CouetteViscousHeating {
         InvalidParameterException.requirePositive("gap", gap, "m");
@@ -167,6 +167,18 @@ public record CouetteViscousHeating(double gap, double viscosity, double conduct
         return 2 * rise() / (b.temperature() - a.temperature());
     }
 
+    /** mu du/dy (Pa) at the lower wall: the stress is uniform across the film. */
+    @Override
+    public double wallShearStressLower() {
+        return shearStress();
+    }
+
+    /** mu du/dy (Pa) at the upper wall: the stress is uniform across the film. */
+    @Override
+    public double wallShearStressUpper() {
+        return shearStress();
+    }
+
     @Override
     public String name() {
         return "steady Couette flow with viscous heating (constant properties)";
@@ -178,38 +190,9 @@ public record CouetteViscousHeating(double gap, double viscosity, double conduct
                 + "Eq. 10.4-9";
     }
 
-    /** Only the steady state, t = +infinity. */
-    @Override
-    public boolean appliesAt(double t) {
-        return t == Double.POSITIVE_INFINITY;
-    }
-
-    @Override
-    public double velocity(double y, double t) {
-        Checks.time(appliesAt(t), t, "+infinity (a steady solution)");
-        return velocity(y);
-    }
-
     @Override
     public boolean hasTemperature() {
         return true;
     }
 
-    @Override
-    public double temperature(double y, double t) {
-        Checks.time(appliesAt(t), t, "+infinity (a steady solution)");
-        return temperature(y);
-    }
-
-    @Override
-    public double wallShearStressLower(double t) {
-        Checks.time(appliesAt(t), t, "+infinity (a steady solution)");
-        return shearStress();
-    }
-
-    @Override
-    public double wallShearStressUpper(double t) {
-        Checks.time(appliesAt(t), t, "+infinity (a steady solution)");
-        return shearStress();
-    }
 }

@@ -44,7 +44,7 @@ import java.util.Objects;
  */
 public record NahmeCouette(double gap, double lowerVelocity, double upperVelocity, double referenceViscosity,
                            double coefficient, double conductivity, double wallTemperature, Walls walls)
-        implements AnalyticSolution {
+        implements SteadySolution {
 
     /** Thermal conditions of the Nahme problem. */
     public enum Walls {
@@ -217,6 +217,18 @@ public record NahmeCouette(double gap, double lowerVelocity, double upperVelocit
         return conductivity / (coefficient * gap) * slope;
     }
 
+    /** mu du/dy (Pa) at the lower wall: the stress is uniform across the film. */
+    @Override
+    public double wallShearStressLower() {
+        return shearStress();
+    }
+
+    /** mu du/dy (Pa) at the upper wall: the stress is uniform across the film. */
+    @Override
+    public double wallShearStressUpper() {
+        return shearStress();
+    }
+
     @Override
     public String name() {
         return "steady Couette flow with viscous heating, exponential viscosity (Nahme problem)";
@@ -228,38 +240,9 @@ public record NahmeCouette(double gap, double lowerVelocity, double upperVelocit
                 + "(1968) (citations from memory); closed forms derived and checked for filmshear";
     }
 
-    /** Only the steady state, t = +infinity. */
-    @Override
-    public boolean appliesAt(double t) {
-        return t == Double.POSITIVE_INFINITY;
-    }
-
-    @Override
-    public double velocity(double y, double t) {
-        Checks.time(appliesAt(t), t, "+infinity (a steady solution)");
-        return velocity(y);
-    }
-
     @Override
     public boolean hasTemperature() {
         return true;
     }
 
-    @Override
-    public double temperature(double y, double t) {
-        Checks.time(appliesAt(t), t, "+infinity (a steady solution)");
-        return temperature(y);
-    }
-
-    @Override
-    public double wallShearStressLower(double t) {
-        Checks.time(appliesAt(t), t, "+infinity (a steady solution)");
-        return shearStress();
-    }
-
-    @Override
-    public double wallShearStressUpper(double t) {
-        Checks.time(appliesAt(t), t, "+infinity (a steady solution)");
-        return shearStress();
-    }
 }
