@@ -7,11 +7,6 @@ import dev.filmshear.cli.input.Unit;
 import dev.filmshear.cli.input.UnitException;
 import dev.filmshear.cli.input.Units;
 
-import java.io.IOException;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -69,21 +64,7 @@ public final class ViscosityCsv {
      * @throws InputException for a missing or unreadable file and every bad datum
      */
     public static ViscosityData read(Path file) {
-        String name = file.toString();
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new InputException(name, 0, FILE_KEY, "no such file", InputException.quote(name),
-                    "the path of an existing CSV file", e);
-        } catch (CharacterCodingException e) {
-            throw new InputException(name, 0, FILE_KEY, "not UTF-8 text", InputException.quote(name),
-                    "a CSV file saved as UTF-8", e);
-        } catch (IOException e) {
-            throw new InputException(name, 0, FILE_KEY, "cannot be read: " + e.getMessage(),
-                    InputException.quote(name), "a readable CSV file", e);
-        }
-        return parse(text, name);
+        return parse(InputException.readText(file, FILE_KEY, "CSV file"), file.toString());
     }
 
     /**

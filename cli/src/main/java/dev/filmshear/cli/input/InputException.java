@@ -86,6 +86,27 @@ public final class InputException extends RuntimeException {
     }
 
     /** A value in double quotes with quotes, backslashes and control characters escaped. */
+    /**
+     * Reads a UTF-8 text file, turning every way it can fail into a one-line error at the file.
+     *
+     * @param file the file, named in messages as given
+     * @param key the key messages name for the file as a whole
+     * @param kind what the file should be, for the allowed part of messages (for example "TOML file")
+     */
+    public static String readText(java.nio.file.Path file, String key, String kind) {
+        String name = file.toString();
+        try {
+            return java.nio.file.Files.readString(file, java.nio.charset.StandardCharsets.UTF_8);
+        } catch (java.nio.file.NoSuchFileException e) {
+            throw new InputException(name, 0, key, "no such file", quote(name), "the path of an existing " + kind, e);
+        } catch (java.nio.charset.CharacterCodingException e) {
+            throw new InputException(name, 0, key, "not UTF-8 text", quote(name), "a " + kind + " saved as UTF-8", e);
+        } catch (java.io.IOException e) {
+            throw new InputException(name, 0, key, "cannot be read: " + e.getMessage(), quote(name),
+                    "a readable " + kind, e);
+        }
+    }
+
     public static String quote(String value) {
         return "\"" + escape(value.replace("\\", "\\\\").replace("\"", "\\\"")) + "\"";
     }

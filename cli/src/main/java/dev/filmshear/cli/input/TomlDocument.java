@@ -7,11 +7,6 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.dataformat.toml.TomlMapper;
 
-import java.io.IOException;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -128,21 +123,7 @@ public final class TomlDocument {
      * @throws InputException when the file cannot be read or is not valid TOML
      */
     public static TomlDocument read(Path file) {
-        String name = file.toString();
-        String text;
-        try {
-            text = Files.readString(file, StandardCharsets.UTF_8);
-        } catch (NoSuchFileException e) {
-            throw new InputException(name, 0, FILE_KEY, "no such file", InputException.quote(name),
-                    "the path of an existing TOML file", e);
-        } catch (CharacterCodingException e) {
-            throw new InputException(name, 0, FILE_KEY, "not UTF-8 text", InputException.quote(name),
-                    "a TOML file saved as UTF-8", e);
-        } catch (IOException e) {
-            throw new InputException(name, 0, FILE_KEY, "cannot be read: " + e.getMessage(),
-                    InputException.quote(name), "a readable TOML file", e);
-        }
-        return parse(text, name);
+        return parse(InputException.readText(file, FILE_KEY, "TOML file"), file.toString());
     }
 
     /** The file as the user named it. */

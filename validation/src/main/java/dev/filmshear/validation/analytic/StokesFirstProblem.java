@@ -29,7 +29,7 @@ import java.util.Objects;
  * A piecewise-linear history w(t) = a(t) - u0 = jump + sum_k s_k max(0, t - t_k) is the sum of one step and
  * one ramp per change of slope (Duhamel's principle).
  */
-public final class StokesFirstProblem implements AnalyticSolution {
+public final class StokesFirstProblem implements SemiInfiniteSolution {
     private final double density;
     private final double viscosity;
     private final WallMotion wallMotion;
@@ -99,22 +99,6 @@ public final class StokesFirstProblem implements AnalyticSolution {
     }
 
     @Override
-    public double wallShearStressLower(double t) {
-        return wallShearStress(t);
-    }
-
-    @Override
-    public boolean hasUpperWall() {
-        return false;
-    }
-
-    /** NaN: a semi-infinite fluid has no upper wall. */
-    @Override
-    public double wallShearStressUpper(double t) {
-        return Double.NaN;
-    }
-
-    @Override
     public String name() {
         return "Stokes' first problem (wall started in semi-infinite fluid)";
     }
@@ -124,12 +108,6 @@ public final class StokesFirstProblem implements AnalyticSolution {
         return "R. B. Bird, W. E. Stewart, E. N. Lightfoot, Transport Phenomena, 2nd ed., Wiley, 2002, Example 4.1-1; "
                 + "ramps by Duhamel's principle (H. S. Carslaw, J. C. Jaeger, Conduction of Heat in Solids, 2nd ed., "
                 + "1959, section 2.5)";
-    }
-
-    /** Finite times above zero: the layer never settles. */
-    @Override
-    public boolean appliesAt(double t) {
-        return t > 0 && t < Double.POSITIVE_INFINITY;
     }
 
     private void checkTime(double t) {

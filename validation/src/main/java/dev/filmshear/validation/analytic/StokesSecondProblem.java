@@ -43,7 +43,7 @@ import java.util.function.DoubleUnaryOperator;
  * compared in the tests where both apply. The started solution tends to the periodic one as t grows; the
  * oscillating part of the difference decays like t^(-3/2), the mean's like t^(-1/2).
  */
-public final class StokesSecondProblem implements AnalyticSolution {
+public final class StokesSecondProblem implements SemiInfiniteSolution {
     /** From this wall phase omega t (one period) on, the started oscillation uses the spectral transient. */
     static final double SPECTRAL_FROM_PHASE = 2 * Math.PI;
     /** The spectral integrands carry exp(-q^2); beyond q = 9 they are below 1e-35 of their peak. */
@@ -195,22 +195,6 @@ public final class StokesSecondProblem implements AnalyticSolution {
     }
 
     @Override
-    public double wallShearStressLower(double t) {
-        return wallShearStress(t);
-    }
-
-    @Override
-    public boolean hasUpperWall() {
-        return false;
-    }
-
-    /** NaN: a semi-infinite fluid has no upper wall. */
-    @Override
-    public double wallShearStressUpper(double t) {
-        return Double.NaN;
-    }
-
-    @Override
     public String name() {
         return "Stokes' second problem (plate started oscillating in semi-infinite fluid)";
     }
@@ -220,12 +204,6 @@ public final class StokesSecondProblem implements AnalyticSolution {
         return "L. D. Landau, E. M. Lifshitz, Fluid Mechanics, 2nd ed., 1987, section 24; started from rest by "
                 + "Duhamel's principle on Stokes' first problem (Bird, Stewart, Lightfoot, Transport Phenomena, "
                 + "2nd ed., 2002, Example 4.1-1)";
-    }
-
-    /** Finite times above zero. */
-    @Override
-    public boolean appliesAt(double t) {
-        return t > 0 && t < Double.POSITIVE_INFINITY;
     }
 
     private void checkTime(double t) {
